@@ -1,0 +1,4 @@
+export interface Flash {
+  kind: "success" | "info" | "error";
+  message: string;
+}

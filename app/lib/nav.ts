@@ -1,0 +1,18 @@
+// Navigation per role. Only sections that exist are listed; later sections add their entry here.
+import type { Role } from "./roles";
+
+export interface NavItem {
+  label: string;
+  to: string;
+  roles: Role[];
+}
+
+export const NAV_ITEMS: NavItem[] = [
+  { label: "Site yield", to: "/yield", roles: ["installer", "curator", "admin"] },
+  { label: "Team", to: "/team", roles: ["installer"] },
+  { label: "Users", to: "/admin/users", roles: ["admin"] },
+];
+
+export function navFor(role: Role | null) {
+  return role ? NAV_ITEMS.filter((item) => item.roles.includes(role)) : [];
+}

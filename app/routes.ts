@@ -1,0 +1,27 @@
+import { type RouteConfig, index, prefix, route } from "@react-router/dev/routes";
+
+export default [
+  index("routes/home.tsx"),
+  route("sign-in", "routes/sign-in.tsx"),
+  route("sign-up", "routes/sign-up.tsx"),
+  route("sign-out", "routes/sign-out.ts"),
+  route("forgot-password", "routes/forgot-password.tsx"),
+  route("reset-password", "routes/reset-password.tsx"),
+  route("invitations/:invitationId", "routes/invitation.tsx"),
+  route("team/new", "routes/team-new.tsx"),
+  route("team", "routes/team.tsx"),
+  route("team/api-keys", "routes/team-api-keys.tsx"),
+  route("admin/users", "routes/admin-users.tsx"),
+  route("yield", "routes/yield.tsx"),
+  route("dev/outbox", "routes/dev-outbox.tsx"),
+  route("healthz", "routes/healthz.ts"),
+  route("readyz", "routes/readyz.ts"),
+  route("api/auth/*", "routes/api.auth.$.ts"),
+  ...prefix("api/v1", [
+    route("me", "routes/api.v1.me.ts"),
+    route("yield", "routes/api.v1.yield.ts"),
+    route("modules", "routes/api.v1.modules.ts"),
+    route("*", "routes/api.v1.not-found.ts"),
+  ]),
+  route("*", "routes/not-found.tsx"),
+] satisfies RouteConfig;

@@ -1,0 +1,45 @@
+// Validates a yield request, resolves a catalogue module, and runs the engine.
+import { estimateMonthlyYield } from "~/domain/solar/monthly-yield";
+import { yieldRequestSchema, zodIssuesToFields } from "~/domain/solar/yield-request";
+import type { ModuleSpec, YieldResult } from "~/domain/solar/yield-types";
+import { findModule } from "./modules.server";
+
+export type YieldOutcome =
+  | { ok: true; result: YieldResult }
+  | { ok: false; status: 400 | 404; error: { message: string; fields?: Record<string, string> } };
+
+export async function computeYield(body: unknown): Promise<YieldOutcome> {
+  const parsed = yieldRequestSchema.safeParse(body);
+  if (!parsed.success) {
+    const fields = zodIssuesToFields(parsed.error);
+    const count = Object.keys(fields).length;
+    return { ok: false, status: 400, error: { message: `${count} field${count === 1 ? " needs" : "s need"} attention.`, fields } };
+  }
+  const request = parsed.data;
+  let module: ModuleSpec;
+  const extraAssumptions: string[] = [];
+  if ("moduleId" in request.module) {
+    const row = await findModule(request.module.moduleId);
+    if (!row) return { ok: false, status: 400, error: { message: "No module with that id in the catalogue.", fields: { "module.moduleId": "No module with that id in the catalogue." } } };
+    module = {
+      pmaxW: row.pmax_w,
+      vmpV: row.vmp_v,
+      impA: row.imp_a,
+      vocV: row.voc_v,
+      iscA: row.isc_a,
+      gammaPmaxPctPerC: row.gamma_pmax_pct_per_c,
+      betaVocPctPerC: row.beta_voc_pct_per_c,
+      alphaIscPctPerC: row.alpha_isc_pct_per_c,
+      noctC: row.noct_c,
+    };
+    extraAssumptions.push(`Module: ${row.maker} ${row.model}, nameplate ${row.pmax_w} W at STC.`);
+    if (request.powerBasis === "verified") {
+      extraAssumptions.push("Verified power was asked for, but this module has no approved field readings yet: its nameplate power is used.");
+    }
+  } else {
+    module = request.module;
+    extraAssumptions.push(`Module: datasheet figures entered by hand, ${module.pmaxW} W at STC.`);
+  }
+  const result = estimateMonthlyYield({ site: request.site, module, controller: request.controller, lossesPct: request.lossesPct, options: request.options });
+  return { ok: true, result: { ...result, assumptions: [...extraAssumptions, ...result.assumptions] } };
+}

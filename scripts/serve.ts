@@ -1,0 +1,54 @@
+// The production HTTP server: static assets, security headers, a request id and one structured log
+// line per request, then React Router's handler. Stateless: run as many as you like behind a load
+// balancer, all on one PostgreSQL (see README, "Running more than one instance").
+import { randomUUID } from "node:crypto";
+import path from "node:path";
+import { pathToFileURL } from "node:url";
+import { createRequestHandler } from "@react-router/express";
+import compression from "compression";
+import express, { type NextFunction, type Request, type Response } from "express";
+import type { ServerBuild } from "react-router";
+import { securityHeaders } from "./lib/security-headers";
+
+const port = Number(process.env.PORT ?? 3000);
+const host = process.env.HOST ?? "127.0.0.1";
+const logLevel = process.env.LOG_LEVEL ?? "info"; // "info": every request; "warn": 4xx and 5xx only; "error": 5xx only
+const buildPath = path.resolve(process.env.SERVER_BUILD ?? "build/server/index.js");
+
+function log(fields: Record<string, unknown>) {
+  process.stdout.write(`${JSON.stringify({ time: new Date().toISOString(), ...fields })}\n`);
+}
+
+function requestLog(req: Request, res: Response, next: NextFunction) {
+  const incoming = req.get("X-Request-Id");
+  const id = incoming && /^[\w-]{8,64}$/.test(incoming) ? incoming : randomUUID();
+  res.setHeader("X-Request-Id", id);
+  const started = process.hrtime.bigint();
+  res.on("finish", () => {
+    const status = res.statusCode;
+    const level = status >= 500 ? "error" : status >= 400 ? "warn" : "info";
+    if ((logLevel === "warn" && level === "info") || (logLevel === "error" && level !== "error")) return;
+    // The path only: query strings can carry tokens (password reset links), never logged.
+    log({ level, msg: "request", id, method: req.method, path: req.path, status, ms: Number(process.hrtime.bigint() - started) / 1e6 });
+  });
+  next();
+}
+
+const build = (await import(pathToFileURL(buildPath).href)) as ServerBuild;
+const app = express();
+app.disable("x-powered-by");
+app.set("trust proxy", process.env.TRUST_PROXY === "1");
+app.use(requestLog);
+app.use(securityHeaders);
+app.use(compression());
+app.use("/assets", express.static(path.join(path.dirname(buildPath), "../client/assets"), { immutable: true, maxAge: "1y" }));
+// Other public files (favicon…): only paths that look like files, so a page request costs no stat().
+const publicFiles = express.static(path.join(path.dirname(buildPath), "../client"), { maxAge: "1h", index: false });
+app.use((req, res, next) => (/\.[a-z0-9]+$/i.test(req.path) ? publicFiles(req, res, next) : next()));
+app.all("*", createRequestHandler({ build, mode: process.env.NODE_ENV ?? "production" }));
+
+const server = app.listen(port, host, () => log({ level: "info", msg: "listening", url: `http://${host}:${port}` }));
+server.keepAliveTimeout = 65_000;
+for (const signal of ["SIGINT", "SIGTERM"] as const) {
+  process.on(signal, () => server.close(() => process.exit(0)));
+}

@@ -1,0 +1,76 @@
+// npm test — everything, from a clean machine: Vitest (unit + integration against a PostgreSQL
+// cluster of its own), then the browser tests (Debian's Chromium, installed when absent) against
+// the production build with the fakes running. Exits non-zero on any failure.
+//   --no-e2e     unit and integration only
+//   --e2e-only   browser tests only
+import { spawnSync } from "node:child_process";
+import { existsSync } from "node:fs";
+import { databaseUrl, E2E_DATABASE, E2E_PORTS, TEST_CLUSTER } from "../tests/setup/test-env";
+import { ensureCluster, ensureDatabase, findPostgresBinDir, startCluster, stopCluster } from "./lib/postgres-cluster";
+import { isPortInUse, stopAll } from "./lib/processes";
+import { appEnv, startAppServer, startFakes } from "./lib/services";
+
+const args = new Set(process.argv.slice(2));
+const runVitest = !args.has("--e2e-only");
+const runE2e = !args.has("--no-e2e");
+
+function step(title: string) {
+  console.log(`\n━━ ${title}`);
+}
+
+function run(command: string, argv: string[], env: NodeJS.ProcessEnv = {}) {
+  const result = spawnSync(command, argv, { stdio: "inherit", env: { ...process.env, ...env } });
+  return result.status === 0;
+}
+
+function ensureChromium() {
+  if (existsSync(process.env.CHROMIUM_PATH ?? "/usr/bin/chromium")) return;
+  step("Installing Debian's Chromium for the browser tests");
+  if (!run("apt-get", ["update", "-qq"]) || !run("apt-get", ["install", "-y", "-qq", "chromium"])) {
+    throw new Error("Could not install chromium from Debian's packages.");
+  }
+}
+
+async function browserTests(): Promise<boolean> {
+  ensureChromium();
+  step("Building the app");
+  if (!run("node_modules/.bin/react-router", ["build"])) return false;
+  const binDir = findPostgresBinDir();
+  ensureCluster(TEST_CLUSTER, binDir);
+  const startedHere = startCluster(TEST_CLUSTER, binDir);
+  try {
+    for (const [name, port] of Object.entries(E2E_PORTS)) {
+      if (await isPortInUse(port)) throw new Error(`Port ${port} (${name}) is taken: is another test run going?`);
+    }
+    const url = databaseUrl(E2E_DATABASE);
+    await ensureDatabase(TEST_CLUSTER.port, E2E_DATABASE, { fresh: true });
+    const env = appEnv(E2E_PORTS, url);
+    step("Migrating and seeding the browser-test database");
+    if (!run("node_modules/.bin/tsx", ["scripts/migrate.ts"], env) || !run("node_modules/.bin/tsx", ["scripts/seed.ts"], env)) return false;
+    await startFakes(env, E2E_PORTS);
+    await startAppServer({ ...env, LOG_LEVEL: "warn" }, E2E_PORTS);
+    step("Browser tests (Chromium)");
+    return run("node_modules/.bin/vitest", ["run", "--project", "e2e"], {
+      ...env,
+      E2E_BASE_URL: `http://127.0.0.1:${E2E_PORTS.app}`,
+      E2E_MAIL_URL: `http://127.0.0.1:${E2E_PORTS.mailHttp}`,
+    });
+  } finally {
+    stopAll();
+    if (startedHere) stopCluster(TEST_CLUSTER, binDir);
+  }
+}
+
+let ok = true;
+try {
+  if (runVitest) {
+    step("Unit and integration tests (Vitest, real PostgreSQL)");
+    ok = run("node_modules/.bin/vitest", ["run", "--project", "unit", "--project", "integration"]) && ok;
+  }
+  if (runE2e) ok = (await browserTests()) && ok;
+} catch (error) {
+  console.error(error instanceof Error ? error.message : error);
+  ok = false;
+}
+console.log(ok ? "\nAll tests passed." : "\nSome tests failed (see above).");
+process.exit(ok ? 0 : 1);

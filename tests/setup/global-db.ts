@@ -1,0 +1,32 @@
+// Vitest global setup for integration tests: a fresh database on the test cluster (started here when
+// it is not running), all migrations applied, and the mail fake listening. Workers inherit the env.
+import { ensureCluster, ensureDatabase, findPostgresBinDir, startCluster, stopCluster } from "../../scripts/lib/postgres-cluster";
+import { execFileSync } from "node:child_process";
+import { startMailFake } from "../../fakes/mail-server";
+import { databaseUrl, INTEGRATION_DATABASE, INTEGRATION_MAIL, TEST_CLUSTER } from "./test-env";
+
+export default async function setup() {
+  const binDir = findPostgresBinDir();
+  ensureCluster(TEST_CLUSTER, binDir);
+  const startedHere = startCluster(TEST_CLUSTER, binDir);
+  await ensureDatabase(TEST_CLUSTER.port, INTEGRATION_DATABASE, { fresh: true });
+  const url = databaseUrl(INTEGRATION_DATABASE);
+  // Migrations are TypeScript files: run them through tsx (Vitest's setup loads modules natively).
+  execFileSync("node_modules/.bin/tsx", ["scripts/migrate.ts"], { env: { ...process.env, DATABASE_URL: url }, stdio: ["ignore", "ignore", "inherit"] });
+  const mail = await startMailFake({ ...INTEGRATION_MAIL, log: () => {} });
+
+  Object.assign(process.env, {
+    NODE_ENV: "test",
+    DATABASE_URL: url,
+    PUBLIC_URL: "http://127.0.0.1:3999",
+    SMTP_HOST: "127.0.0.1",
+    SMTP_PORT: String(INTEGRATION_MAIL.smtpPort),
+    MAIL_FAKE_URL: mail.url,
+    ENABLE_DEV_OUTBOX: "true",
+  });
+
+  return async () => {
+    await mail.close();
+    if (startedHere && !process.env.KITWRIGHT_KEEP_TEST_DB) stopCluster(TEST_CLUSTER, binDir);
+  };
+}
