@@ -21,7 +21,9 @@ export const meta: Route.MetaFunction = () => [{ title: "Site yield · Kitwright
 export async function loader({ request }: Route.LoaderArgs) {
   await requireRole(request, "installer", "curator", "admin");
   const { items } = await listModules({ search: "", limit: 200, offset: 0 });
-  const form = defaultYieldForm(items[0]?.id ?? "");
+  // Start from the catalogue module nearest 100 W: a typical size for a small off-grid kit.
+  const start = [...items].sort((a, b) => Math.abs(a.pmax_w - 100) - Math.abs(b.pmax_w - 100))[0];
+  const form = defaultYieldForm(start?.id ?? "");
   const initial = await computeYield(toRequestBody(form));
   return {
     modules: items.map((m) => ({ id: m.id, label: `${m.maker} ${m.model} — ${m.pmax_w} W ${m.cell_technology}` })),

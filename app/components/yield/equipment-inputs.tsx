@@ -42,6 +42,19 @@ export function EquipmentInputs({
         </select>
         {errors["module.moduleId"] ? <p className="mt-0.5 text-xs text-fail">✕ {errors["module.moduleId"]}</p> : null}
       </div>
+      {state.moduleId ? (
+        <fieldset className="text-sm">
+          <legend className="mb-1 font-medium">Power basis</legend>
+          <label className="mr-4 inline-flex items-center gap-1.5">
+            <input type="radio" name="powerBasis" checked={state.powerBasis === "nameplate"} onChange={() => update({ powerBasis: "nameplate" })} />
+            Nameplate
+          </label>
+          <label className="inline-flex items-center gap-1.5">
+            <input type="radio" name="powerBasis" checked={state.powerBasis === "verified"} onChange={() => update({ powerBasis: "verified" })} />
+            Verified by field readings
+          </label>
+        </fieldset>
+      ) : null}
       {state.moduleId === "" ? (
         <div className="grid grid-cols-3 gap-2">
           {CUSTOM_FIELDS.map(({ key, label, unit }) => (

@@ -3,6 +3,8 @@ import type { YieldResult } from "~/domain/solar/yield-types";
 import { MONTH_NAMES } from "~/lib/yield-form";
 
 const f = (value: number | null, digits: number) => (value === null ? "—" : value.toFixed(digits));
+/** Gains read "+", losses "−", so the column says which way output moved. */
+const signed = (value: number) => `${value > 0.05 ? "+" : value < -0.05 ? "−" : ""}${Math.abs(value).toFixed(1)}`;
 
 export function YieldResults({ result }: { result: YieldResult }) {
   const worst = result.months[result.worstMonth - 1];
@@ -45,8 +47,8 @@ export function YieldResults({ result }: { result: YieldResult }) {
               <th className="px-2 font-medium">Diffuse share</th>
               <th className="px-2 font-medium">In-plane kWh/m²/d</th>
               <th className="px-2 font-medium">Cell °C (day)</th>
-              <th className="px-2 font-medium">Temp. loss</th>
-              <th className="px-2 font-medium">Controller loss</th>
+              <th className="px-2 font-medium" title="Output change from cell temperature against 25 °C">Temp. effect</th>
+              <th className="px-2 font-medium">Controller</th>
               <th className="pl-2 font-medium">Energy Wh/day</th>
             </tr>
           </thead>
@@ -65,8 +67,8 @@ export function YieldResults({ result }: { result: YieldResult }) {
                 <td className="px-2">{f(m.diffuseFraction * 100, 0)} %</td>
                 <td className="px-2">{f(m.poaKWhM2Day, 2)}</td>
                 <td className="px-2">{f(m.cellTempDaytimeC, 1)}</td>
-                <td className="px-2">{f(m.temperatureLossPct, 1)} %</td>
-                <td className="px-2">{f(m.controllerLossPct, 1)} %</td>
+                <td className="px-2">{signed(-m.temperatureLossPct)} %</td>
+                <td className="px-2">{signed(-m.controllerLossPct)} %</td>
                 <td className="pl-2 font-semibold">{f(m.energyWhPerDay, 0)}</td>
               </tr>
             ))}

@@ -47,3 +47,12 @@ export async function mailTo(email: string, subjectPart: string) {
   }
   throw new Error(`No mail "${subjectPart}" to ${email}`);
 }
+
+/** Signs in one of the seeded demo accounts (data/demo/people.ts). */
+export async function signInDemo(page: Page, email: string) {
+  await page.goto("/sign-in");
+  await page.getByLabel("E-mail").fill(email);
+  await page.getByLabel("Password").fill("vell-valley-demo");
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await page.waitForURL((url) => !url.pathname.startsWith("/sign-in"));
+}
