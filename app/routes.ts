@@ -13,6 +13,9 @@ export default [
   route("team/api-keys", "routes/team-api-keys.tsx"),
   route("admin/users", "routes/admin-users.tsx"),
   route("yield", "routes/yield.tsx"),
+  // — catalogue (issue 4) —
+  // — field readings and review (issue 4) —
+  // — sites, load sheets and kit plans (issue 5) —
   route("dev/outbox", "routes/dev-outbox.tsx"),
   route("healthz", "routes/healthz.ts"),
   route("readyz", "routes/readyz.ts"),
@@ -21,6 +24,8 @@ export default [
     route("me", "routes/api.v1.me.ts"),
     route("yield", "routes/api.v1.yield.ts"),
     route("modules", "routes/api.v1.modules.ts"),
+    // — API: catalogue and readings (issue 4) —
+    // — API: sites and plans (issue 5) —
     route("*", "routes/api.v1.not-found.ts"),
   ]),
   route("*", "routes/not-found.tsx"),
