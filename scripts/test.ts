@@ -31,17 +31,27 @@ function ensureChromium() {
   }
 }
 
+async function waitForFreePorts() {
+  // Another browser-test run on this machine holds the ports: wait for it rather than rebuild under it.
+  for (let waited = 0; waited < 600; waited += 5) {
+    const busy = [];
+    for (const [name, port] of Object.entries(E2E_PORTS)) if (await isPortInUse(port)) busy.push(`${port} (${name})`);
+    if (!busy.length) return;
+    if (waited === 0) console.log(`Waiting for ports ${busy.join(", ")} to be free (another test run?)…`);
+    await new Promise((r) => setTimeout(r, 5000));
+  }
+  throw new Error("The browser-test ports stayed busy for 10 minutes.");
+}
+
 async function browserTests(): Promise<boolean> {
   ensureChromium();
+  await waitForFreePorts();
   step("Building the app");
   if (!run("node_modules/.bin/react-router", ["build"])) return false;
   const binDir = findPostgresBinDir();
   ensureCluster(TEST_CLUSTER, binDir);
   const startedHere = startCluster(TEST_CLUSTER, binDir);
   try {
-    for (const [name, port] of Object.entries(E2E_PORTS)) {
-      if (await isPortInUse(port)) throw new Error(`Port ${port} (${name}) is taken: is another test run going?`);
-    }
     const url = databaseUrl(E2E_DATABASE);
     await ensureDatabase(TEST_CLUSTER.port, E2E_DATABASE, { fresh: true });
     const env = appEnv(E2E_PORTS, url);

@@ -118,3 +118,26 @@ export async function ensureDatabase(port: number, name: string, { fresh = false
     await client.end();
   }
 }
+
+export async function dropDatabase(port: number, name: string) {
+  if (!/^[a-z_][a-z0-9_]*$/.test(name)) throw new Error(`Unsafe database name: ${name}`);
+  const client = new pg.Client({ connectionString: adminUrl(port) });
+  await client.connect();
+  try {
+    await client.query(`DROP DATABASE IF EXISTS ${name} WITH (FORCE)`);
+  } finally {
+    await client.end();
+  }
+}
+
+/** How many integration-test databases other runs still use (the cluster stays up for them). */
+export async function otherTestDatabases(port: number) {
+  const client = new pg.Client({ connectionString: adminUrl(port) });
+  await client.connect();
+  try {
+    const { rows } = await client.query("SELECT count(*)::int AS n FROM pg_database WHERE datname LIKE 'kitwright\\_test\\_%'");
+    return rows[0].n as number;
+  } finally {
+    await client.end();
+  }
+}

@@ -1,6 +1,6 @@
 // Vitest global setup for integration tests: a fresh database on the test cluster (started here when
 // it is not running), all migrations applied, and the mail fake listening. Workers inherit the env.
-import { ensureCluster, ensureDatabase, findPostgresBinDir, startCluster, stopCluster } from "../../scripts/lib/postgres-cluster";
+import { dropDatabase, ensureCluster, ensureDatabase, findPostgresBinDir, otherTestDatabases, startCluster, stopCluster } from "../../scripts/lib/postgres-cluster";
 import { execFileSync } from "node:child_process";
 import { startMailFake } from "../../fakes/mail-server";
 import { databaseUrl, INTEGRATION_DATABASE, INTEGRATION_MAIL, TEST_CLUSTER } from "./test-env";
@@ -9,8 +9,10 @@ export default async function setup() {
   const binDir = findPostgresBinDir();
   ensureCluster(TEST_CLUSTER, binDir);
   const startedHere = startCluster(TEST_CLUSTER, binDir);
-  await ensureDatabase(TEST_CLUSTER.port, INTEGRATION_DATABASE, { fresh: true });
-  const url = databaseUrl(INTEGRATION_DATABASE);
+  // One database per run, so that two runs on one machine never drop each other's data.
+  const database = `${INTEGRATION_DATABASE}_${process.pid}`;
+  await ensureDatabase(TEST_CLUSTER.port, database, { fresh: true });
+  const url = databaseUrl(database);
   // Migrations are TypeScript files: run them through tsx (Vitest's setup loads modules natively).
   execFileSync("node_modules/.bin/tsx", ["scripts/migrate.ts"], { env: { ...process.env, DATABASE_URL: url }, stdio: ["ignore", "ignore", "inherit"] });
   const mail = await startMailFake({ ...INTEGRATION_MAIL, log: () => {} });
@@ -27,6 +29,8 @@ export default async function setup() {
 
   return async () => {
     await mail.close();
-    if (startedHere && !process.env.KITWRIGHT_KEEP_TEST_DB) stopCluster(TEST_CLUSTER, binDir);
+    if (process.env.KITWRIGHT_KEEP_TEST_DB) return;
+    await dropDatabase(TEST_CLUSTER.port, database);
+    if (startedHere && (await otherTestDatabases(TEST_CLUSTER.port)) === 0) stopCluster(TEST_CLUSTER, binDir);
   };
 }
