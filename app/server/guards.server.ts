@@ -32,7 +32,7 @@ export async function requireUser(request: Request) {
   return user;
 }
 
-export function forbidden(message = "This page is not open to your account.") {
+export function forbidden(message = "Your account does not have access to this page. If you think it should, ask your team's owner or the service admin.") {
   return new Response(message, { status: 403, statusText: "Forbidden" });
 }
 

@@ -2,7 +2,8 @@
 import { estimateMonthlyYield } from "~/domain/solar/monthly-yield";
 import { yieldRequestSchema, zodIssuesToFields } from "~/domain/solar/yield-request";
 import type { ModuleSpec, YieldResult } from "~/domain/solar/yield-types";
-import { findModule } from "./modules.server";
+import { db } from "./db.server";
+import { isUuid } from "./modules.server";
 
 export type YieldOutcome =
   | { ok: true; result: YieldResult }
@@ -19,7 +20,7 @@ export async function computeYield(body: unknown): Promise<YieldOutcome> {
   let module: ModuleSpec;
   const extraAssumptions: string[] = [];
   if ("moduleId" in request.module) {
-    const row = await findModule(request.module.moduleId);
+    const row = await findModuleFigures(request.module.moduleId);
     if (!row) return { ok: false, status: 400, error: { message: "No module with that id in the catalogue.", fields: { "module.moduleId": "No module with that id in the catalogue." } } };
     module = {
       pmaxW: row.pmax_w,
@@ -42,4 +43,14 @@ export async function computeYield(body: unknown): Promise<YieldOutcome> {
   }
   const result = estimateMonthlyYield({ site: request.site, module, controller: request.controller, lossesPct: request.lossesPct, options: request.options });
   return { ok: true, result: { ...result, assumptions: [...extraAssumptions, ...result.assumptions] } };
+}
+
+/** Only the figures the engine needs: this runs on every yield request. */
+async function findModuleFigures(id: string) {
+  if (!isUuid(id)) return undefined;
+  return db
+    .selectFrom("pv_module")
+    .select(["maker", "model", "pmax_w", "vmp_v", "imp_a", "voc_v", "isc_a", "gamma_pmax_pct_per_c", "beta_voc_pct_per_c", "alpha_isc_pct_per_c", "noct_c"])
+    .where("id", "=", id)
+    .executeTakeFirst();
 }
