@@ -16,6 +16,9 @@ export default [
   // — catalogue (issue 4) —
   // — field readings and review (issue 4) —
   // — sites, load sheets and kit plans (issue 5) —
+  route("sites", "routes/sites.tsx"),
+  route("sites/new", "routes/sites-new.tsx"),
+  route("sites/:siteId", "routes/site.tsx"),
   route("dev/outbox", "routes/dev-outbox.tsx"),
   route("healthz", "routes/healthz.ts"),
   route("readyz", "routes/readyz.ts"),
@@ -26,6 +29,8 @@ export default [
     route("modules", "routes/api.v1.modules.ts"),
     // — API: catalogue and readings (issue 4) —
     // — API: sites and plans (issue 5) —
+    route("sites", "routes/api.v1.sites.ts"),
+    route("sites/:siteId", "routes/api.v1.site.ts"),
     route("*", "routes/api.v1.not-found.ts"),
   ]),
   route("*", "routes/not-found.tsx"),

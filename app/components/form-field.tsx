@@ -22,7 +22,8 @@ export function TextField({
   hint,
   autoComplete,
 }: {
-  field: FieldMetadata<string | undefined>;
+  // Any scalar field: text, e-mail, numbers typed as text.
+  field: FieldMetadata<any, any, string[]>;
   label: ReactNode;
   type?: "text" | "email" | "password" | "number";
   hint?: string;

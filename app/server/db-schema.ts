@@ -1,6 +1,7 @@
 // Every table the app reads or writes. better-auth's tables keep its camelCase column names;
 // Kitwright's own tables use snake_case.
 import type { ColumnType, Generated, GeneratedAlways, Selectable } from "kysely";
+import type { PlanningTables } from "./db-schema-planning";
 
 type Timestamp = ColumnType<Date, Date | string | undefined, Date | string>;
 
@@ -71,7 +72,7 @@ export interface TeamApiKeyTable {
   revoked_at: Timestamp | null;
 }
 
-export interface Database {
+export interface Database extends PlanningTables {
   user: UserTable;
   session: SessionTable;
   organization: OrganizationTable;

@@ -84,3 +84,10 @@ export async function requireApiActor(request: Request): Promise<ApiActor> {
   const team = user.role === "installer" ? await findMembership(user.id) : null;
   return { kind: "user", user, teamId: team?.teamId ?? null };
 }
+
+/** The team an API request acts for; customers, curators and admins have none → 403 JSON. */
+export async function requireApiTeam(request: Request) {
+  const actor = await requireApiActor(request);
+  if (!actor.teamId) throw Response.json({ error: { message: "This endpoint serves installer teams: sign in as an installer with a team, or use a team API key." } }, { status: 403 });
+  return { actor, teamId: actor.teamId, userId: actor.kind === "user" ? actor.user.id : null };
+}

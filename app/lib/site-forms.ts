@@ -1,0 +1,97 @@
+// The site form: customer, place, array orientation and monthly climate. The climate's physical
+// checks (ranges, irradiation against what reaches the ground) are the yield API's own site schema,
+// so a site that saves is a site the engine accepts.
+import { z } from "zod";
+import { siteSchema } from "~/domain/solar/yield-request";
+
+/** Clearness-index presets for sites without weather data (common practice, no source: round values). */
+export const CLEARNESS_PRESETS = {
+  arid: { label: "Arid, mostly clear skies", clearnessIndex: 0.65 },
+  temperate: { label: "Temperate, mixed skies", clearnessIndex: 0.5 },
+  overcast: { label: "Often overcast", clearnessIndex: 0.35 },
+} as const;
+export type ClearnessPreset = keyof typeof CLEARNESS_PRESETS;
+
+const num = (label: string) => z.number({ error: (i) => (i.input === undefined ? `Enter the ${label}.` : `The ${label} must be a number.`) });
+
+function isTimeZone(value: string) {
+  try {
+    new Intl.DateTimeFormat("en", { timeZone: value });
+    return true;
+  } catch {
+    return false;
+  }
+}
+
+const monthSchema = z.object({
+  ghiKWhM2Day: z.number({ error: "Enter a number (kWh/m² per day)." }).optional(),
+  tMaxC: num("mean daily maximum"),
+  tMinC: num("mean daily minimum"),
+  albedo: z.number({ error: "Albedo is a number from 0 to 1." }).optional(),
+});
+
+export const siteFormSchema = z
+  .object({
+    name: z.string({ error: "Name the site." }).trim().min(2, "Use at least 2 characters.").max(120),
+    customerName: z.string({ error: "Enter the customer's name." }).trim().min(2, "Use at least 2 characters.").max(120),
+    customerEmail: z.email("Enter a valid e-mail address.").max(254).optional(),
+    customerPhone: z.string().trim().max(40).optional(),
+    latitudeDeg: num("latitude"),
+    longitudeDeg: num("longitude"),
+    elevationM: num("elevation").min(-500, "Elevation must be above −500 m.").max(9000, "Elevation must be below 9000 m."),
+    timeZone: z.string({ error: "Enter the time zone, e.g. Europe/Vienna." }).trim().refine(isTimeZone, "Unknown time zone: use a name like Europe/Vienna or America/Lima."),
+    tiltDeg: num("tilt"),
+    azimuthDeg: num("facing"),
+    albedo: num("albedo"),
+    shadingDeratePct: num("shading derate").min(0, "Shading derate is 0–80 %.").max(80, "Shading derate is 0–80 %."),
+    coldestTempC: num("coldest temperature").min(-60, "The coldest temperature must be at least −60 °C.").max(40, "The coldest temperature must be at most 40 °C."),
+    irradianceSource: z.enum(["measured", "clearness-preset"], "Choose where the irradiation comes from."),
+    clearnessPreset: z.enum(Object.keys(CLEARNESS_PRESETS) as [ClearnessPreset, ...ClearnessPreset[]]).optional(),
+    months: z.array(monthSchema).length(12, "Give all 12 months."),
+    notes: z.string().trim().max(4000).optional(),
+  })
+  // Runs even when some fields already failed, so that the installer sees every problem at once;
+  // a field that already has a message gets no second one.
+  .superRefine(
+    (site, ctx) => {
+      const taken = new Set(ctx.issues.map((i) => i.path.join(".")));
+      const add = (path: (string | number)[], message: string) => {
+        const key = path.join(".");
+        if (taken.has(key)) return;
+        taken.add(key);
+        ctx.addIssue({ code: "custom", path, message });
+      };
+      const months = Array.isArray(site.months) ? site.months : [];
+      if (site.irradianceSource === "clearness-preset" && !site.clearnessPreset) add(["clearnessPreset"], "Choose a sky preset.");
+      if (site.irradianceSource === "measured") {
+        months.forEach((m, i) => m && m.ghiKWhM2Day === undefined && add(["months", i, "ghiKWhM2Day"], "Enter the month's irradiation."));
+      }
+      const minima = months.map((m) => m?.tMinC).filter((t): t is number => typeof t === "number");
+      if (typeof site.coldestTempC === "number" && minima.length && site.coldestTempC > Math.min(...minima)) {
+        add(["coldestTempC"], "The coldest temperature cannot be above a month's mean minimum.");
+      }
+      const climate = siteSchema.safeParse(toEngineSite(site));
+      if (!climate.success) for (const issue of climate.error.issues) add(issue.path as (string | number)[], issue.message);
+    },
+    { when: () => true },
+  );
+
+export type SiteForm = z.output<typeof siteFormSchema>;
+
+/** The site as the yield engine takes it; a preset fills every month's clearness index. */
+export function toEngineSite(site: Pick<SiteForm, "latitudeDeg" | "longitudeDeg" | "tiltDeg" | "azimuthDeg" | "albedo" | "irradianceSource" | "clearnessPreset" | "months">) {
+  const kt = site.irradianceSource === "clearness-preset" && site.clearnessPreset ? CLEARNESS_PRESETS[site.clearnessPreset].clearnessIndex : undefined;
+  return {
+    latitudeDeg: site.latitudeDeg,
+    longitudeDeg: site.longitudeDeg,
+    tiltDeg: site.tiltDeg,
+    azimuthDeg: site.azimuthDeg,
+    albedo: site.albedo,
+    months: (Array.isArray(site.months) ? site.months : []).map((m) => ({
+      ...(kt !== undefined ? { clearnessIndex: kt } : { ghiKWhM2Day: m.ghiKWhM2Day }),
+      tMaxC: m.tMaxC,
+      tMinC: m.tMinC,
+      ...(m.albedo !== undefined ? { albedo: m.albedo } : {}),
+    })),
+  };
+}
