@@ -19,6 +19,8 @@ export default [
   route("sites", "routes/sites.tsx"),
   route("sites/new", "routes/sites-new.tsx"),
   route("sites/:siteId", "routes/site.tsx"),
+  route("sites/:siteId/loads/new", "routes/load-sheet-new.tsx"),
+  route("sites/:siteId/loads/:loadSheetId", "routes/load-sheet.tsx"),
   route("dev/outbox", "routes/dev-outbox.tsx"),
   route("healthz", "routes/healthz.ts"),
   route("readyz", "routes/readyz.ts"),

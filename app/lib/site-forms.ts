@@ -54,7 +54,7 @@ export const siteFormSchema = z
   // a field that already has a message gets no second one.
   .superRefine(
     (site, ctx) => {
-      const taken = new Set(ctx.issues.map((i) => i.path.join(".")));
+      const taken = new Set(ctx.issues.map((i) => (i.path ?? []).join(".")));
       const add = (path: (string | number)[], message: string) => {
         const key = path.join(".");
         if (taken.has(key)) return;

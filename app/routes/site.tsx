@@ -7,6 +7,8 @@ import { siteFormSchema } from "~/lib/site-forms";
 import { redirectWithFlash } from "~/server/flash.server";
 import { requireTeamMember } from "~/server/guards.server";
 import { deleteSite, findSite, siteToForm, updateSite } from "~/server/sites.server";
+import { listLoadSheets } from "~/server/load-sheets.server";
+import { SiteLoadSheets } from "~/components/sites/site-load-sheets";
 
 export const meta: Route.MetaFunction = ({ data }) => [{ title: `${data?.site.name ?? "Site"} · Kitwright` }];
 
@@ -19,8 +21,9 @@ async function loadSite(request: Request, siteId: string) {
 }
 
 export async function loader({ request, params }: Route.LoaderArgs) {
-  const { site } = await loadSite(request, params.siteId);
-  return { site: { id: site.id, name: site.name }, form: siteToForm(site) };
+  const { team, site } = await loadSite(request, params.siteId);
+  const sheets = await listLoadSheets(team.teamId, site.id);
+  return { site: { id: site.id, name: site.name }, form: siteToForm(site), sheets: sheets.map((s) => ({ id: s.id, name: s.name, applianceCount: s.appliances.length })) };
 }
 
 export async function action({ request, params }: Route.ActionArgs) {
@@ -50,6 +53,7 @@ export default function SitePage({ loaderData, actionData }: Route.ComponentProp
           </Form>
         }
       />
+      <SiteLoadSheets siteId={loaderData.site.id} sheets={loaderData.sheets} />
       <SiteFormView key={loaderData.site.id} lastResult={actionData?.result} submitLabel="Save changes" defaultValue={loaderData.form} />
     </>
   );

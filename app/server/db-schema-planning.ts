@@ -1,5 +1,6 @@
 // Team-owned planning tables: sites and load sheets (and, later, kit plans).
 import type { ColumnType, Generated, Selectable } from "kysely";
+import type { Appliance } from "~/domain/load/load-sheet-types";
 
 type Timestamp = ColumnType<Date, Date | string | undefined, Date | string>;
 type Json<T> = ColumnType<T, string, string>;
@@ -37,20 +38,8 @@ export interface SiteTable {
   updated_at: Timestamp;
 }
 
-export interface ApplianceJson {
-  name: string;
-  powerW: number;
-  hoursPerDay: number;
-  daysPerWeek: number;
-  kind: "ac" | "dc";
-  surgeW: number;
-  /** Months it runs, 1..12. */
-  months: number[];
-  /** How many of this appliance there are… */
-  quantity: number;
-  /** …and how many may run at once (for peak power). */
-  simultaneous: number;
-}
+/** Stored as the load domain's own appliance shape (app/domain/load/load-sheet-types.ts). */
+export type ApplianceJson = Appliance;
 
 export interface LoadSheetTable {
   id: Generated<string>;
