@@ -3,7 +3,7 @@
 import { dropDatabase, ensureCluster, ensureDatabase, findPostgresBinDir, otherTestDatabases, startCluster, stopCluster } from "../../scripts/lib/postgres-cluster";
 import { execFileSync } from "node:child_process";
 import { startMailFake } from "../../fakes/mail-server";
-import { databaseUrl, INTEGRATION_DATABASE, INTEGRATION_MAIL, TEST_CLUSTER } from "./test-env";
+import { databaseUrl, INTEGRATION_DATABASE, TEST_CLUSTER } from "./test-env";
 
 export default async function setup() {
   const binDir = findPostgresBinDir();
@@ -15,14 +15,15 @@ export default async function setup() {
   const url = databaseUrl(database);
   // Migrations are TypeScript files: run them through tsx (Vitest's setup loads modules natively).
   execFileSync("node_modules/.bin/tsx", ["scripts/migrate.ts"], { env: { ...process.env, DATABASE_URL: url }, stdio: ["ignore", "ignore", "inherit"] });
-  const mail = await startMailFake({ ...INTEGRATION_MAIL, log: () => {} });
+  // Free ports chosen by the system, so that several runs on one machine never collide.
+  const mail = await startMailFake({ smtpPort: 0, httpPort: 0, log: () => {} });
 
   Object.assign(process.env, {
     NODE_ENV: "test",
     DATABASE_URL: url,
     PUBLIC_URL: "http://127.0.0.1:3999",
     SMTP_HOST: "127.0.0.1",
-    SMTP_PORT: String(INTEGRATION_MAIL.smtpPort),
+    SMTP_PORT: String(mail.smtpPort),
     MAIL_FAKE_URL: mail.url,
     ENABLE_DEV_OUTBOX: "true",
   });

@@ -12,5 +12,4 @@ export const INTEGRATION_DATABASE = "kitwright_test";
 export const E2E_DATABASE = "kitwright_e2e";
 export const databaseUrl = (name: string) => `postgres://postgres@127.0.0.1:${TEST_PG_PORT}/${name}`;
 
-export const INTEGRATION_MAIL = { smtpPort: 2725, httpPort: 2780 };
 export const E2E_PORTS: ServicePorts = { app: 3310, smtp: 2625, mailHttp: 2680, payments: 12211 };
