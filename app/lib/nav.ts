@@ -10,6 +10,7 @@ export interface NavItem {
 export const NAV_ITEMS: NavItem[] = [
   { label: "Site yield", to: "/yield", roles: ["installer", "curator", "admin"] },
   { label: "Sites", to: "/sites", roles: ["installer"] },
+  { label: "Kit plans", to: "/plans", roles: ["installer"] },
   { label: "Team", to: "/team", roles: ["installer"] },
   { label: "Users", to: "/admin/users", roles: ["admin"] },
 ];

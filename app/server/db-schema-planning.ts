@@ -1,6 +1,8 @@
 // Team-owned planning tables: sites and load sheets (and, later, kit plans).
 import type { ColumnType, Generated, Selectable } from "kysely";
 import type { Appliance } from "~/domain/load/load-sheet-types";
+import type { KitPlan, KitPlanInput } from "~/domain/sizing/plan-types";
+import type { PlanChoicesJson } from "~/lib/plan-choices";
 
 type Timestamp = ColumnType<Date, Date | string | undefined, Date | string>;
 type Json<T> = ColumnType<T, string, string>;
@@ -52,9 +54,45 @@ export interface LoadSheetTable {
   updated_at: Timestamp;
 }
 
+export interface KitPlanTable {
+  id: Generated<string>;
+  team_id: string;
+  site_id: string;
+  load_sheet_id: string | null;
+  name: string;
+  latest_revision: Generated<number>;
+  created_by: string | null;
+  created_at: Timestamp;
+  updated_at: Timestamp;
+}
+
+export interface PlanOverrideJson {
+  checkId: string;
+  reason: string;
+  byUserId: string;
+  byName: string;
+  at: string;
+}
+
+export interface KitPlanRevisionTable {
+  id: Generated<string>;
+  plan_id: string;
+  revision: number;
+  choices: Json<PlanChoicesJson>;
+  inputs: Json<KitPlanInput>;
+  result: Json<KitPlan>;
+  failing_safety_checks: number;
+  overrides: ColumnType<PlanOverrideJson[], string | undefined, string>;
+  note: Generated<string>;
+  created_by: string | null;
+  created_at: Timestamp;
+}
+
 export interface PlanningTables {
   site: SiteTable;
   load_sheet: LoadSheetTable;
+  kit_plan: KitPlanTable;
+  kit_plan_revision: KitPlanRevisionTable;
 }
 
 export type Site = Selectable<SiteTable>;

@@ -3,6 +3,7 @@
 import { spawnSync } from "node:child_process";
 import { bootBenchStack } from "./http-stack";
 import { benchYieldApi, rssMb, type LoadFigures } from "./http-yield";
+import { printPlanBench } from "./plan";
 
 const seconds = Number(process.env.BENCH_SECONDS ?? 10);
 
@@ -13,6 +14,15 @@ function row(name: string, f: LoadFigures) {
 console.log("━━ Engine (pure TypeScript, one core)");
 spawnSync("node_modules/.bin/tsx", ["scripts/bench/engine.ts"], { stdio: "inherit" });
 
+console.log("\n━━ Kit plan (pure TypeScript, one core)");
+printPlanBench();
+
+console.log("\n━━ Field readings (pure TypeScript, one core)");
+(await import("./readings")).printReadingsBench();
+
+console.log("\n━━ Sourcing (pure TypeScript, one core)");
+(await import("./sourcing")).printSourcingBench();
+
 console.log(`\n━━ HTTP (autocannon, 32 connections, ${seconds} s per run)`);
 const stack = await bootBenchStack();
 try {
@@ -22,6 +32,7 @@ try {
   console.log(row("POST /api/v1/yield", yieldRun.api));
   console.log(`  ratio (yield API / bare)   ${yieldRun.ratio.toFixed(3)}   (target ≥ 0.10 with p99 < 50 ms)`);
   console.log(`  app server memory (RSS)    ${memoryStartMb.toFixed(0)} MB at start → ${rssMb(stack.serverPid).toFixed(0)} MB at end`);
+  await (await import("./http-catalogue")).reportCatalogueBench({ apiKey: stack.apiKey, seconds });
 } finally {
   stack.stop();
 }

@@ -45,6 +45,18 @@ export function effectiveDepthOfDischargePct(battery: BatteryPart, maxDepthOfDis
   return Math.min(battery.usableDodPct, maxDepthOfDischargePct ?? battery.usableDodPct);
 }
 
+const VOLTAGE_CLASSES_V = [2, 4, 6, 8, 12, 24, 36, 48];
+
+/**
+ * The nominal class a battery block belongs to. Lead-acid blocks are exact (2, 6, 12 V); lithium iron
+ * phosphate blocks of 12.8, 25.6 and 51.2 V (4, 8 and 16 cells of 3.2 V) serve 12, 24 and 48 V systems
+ * (common practice, no source). A block within 8 % of a class counts as that class.
+ */
+export function batteryVoltageClassV(nominalVoltageV: number): number {
+  const match = VOLTAGE_CLASSES_V.find((c) => Math.abs(nominalVoltageV / c - 1) <= 0.08);
+  return match ?? nominalVoltageV;
+}
+
 export function sizeBatteryBank(input: BatteryBankInput): BatteryBankSizing {
   const { battery, systemVoltageV, dailyLoadWh, autonomyDays, batteryTempC } = input;
   const effectiveDodPct = effectiveDepthOfDischargePct(battery, input.maxDepthOfDischargePct);
@@ -52,7 +64,7 @@ export function sizeBatteryBank(input: BatteryBankInput): BatteryBankSizing {
   const requiredUsableWh = dailyLoadWh * autonomyDays;
   const requiredNominalWh = requiredUsableWh / ((effectiveDodPct / 100) * temperatureFactor);
   const requiredAh = requiredNominalWh / systemVoltageV;
-  const seriesRatio = systemVoltageV / battery.nominalVoltageV;
+  const seriesRatio = systemVoltageV / batteryVoltageClassV(battery.nominalVoltageV);
   const seriesExact = Math.abs(seriesRatio - Math.round(seriesRatio)) < 1e-9 && Math.round(seriesRatio) >= 1;
   const batteriesInSeries = Math.max(1, Math.round(seriesRatio));
   const stringsInParallel = input.stringsInParallel ?? Math.max(1, Math.ceil(requiredAh / battery.capacityAh - 1e-9));

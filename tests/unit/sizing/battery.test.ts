@@ -52,6 +52,16 @@ describe("battery bank for autonomy, depth of discharge and temperature", () => 
     expect(bank.stringsInParallel).toBe(5);
   });
 
+  it("counts 12.8 / 25.6 / 51.2 V lithium blocks as the 12 / 24 / 48 V classes (common practice, no source)", () => {
+    // 8 cells × 3.2 V = 25.6 V: one block is a 24 V bank; two 12.8 V blocks in series make 24 V.
+    const one = sizeBatteryBank({ battery: { ...lfp12V, nominalVoltageV: 25.6 }, systemVoltageV: 24, dailyLoadWh: 1000, autonomyDays: 1, batteryTempC: 20 });
+    expect([one.seriesExact, one.batteriesInSeries]).toEqual([true, 1]);
+    const two = sizeBatteryBank({ battery: { ...lfp12V, nominalVoltageV: 12.8 }, systemVoltageV: 24, dailyLoadWh: 1000, autonomyDays: 1, batteryTempC: 20 });
+    expect([two.seriesExact, two.batteriesInSeries]).toEqual([true, 2]);
+    const tooHigh = sizeBatteryBank({ battery: { ...lfp12V, nominalVoltageV: 51.2 }, systemVoltageV: 24, dailyLoadWh: 1000, autonomyDays: 1, batteryTempC: 20 });
+    expect(tooHigh.seriesExact).toBe(false);
+  });
+
   it("flags batteries whose voltage does not divide the system voltage", () => {
     const odd = sizeBatteryBank({ battery: { ...lfp12V, nominalVoltageV: 36 }, systemVoltageV: 48, dailyLoadWh: 1000, autonomyDays: 1, batteryTempC: 20 });
     expect(odd.seriesExact).toBe(false);

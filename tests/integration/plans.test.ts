@@ -1,0 +1,136 @@
+// Kit plans: computed from the team's site, loads and catalogue parts, saved with a snapshot, revised,
+// overridden only with a reason, and invisible to other teams.
+import { describe, expect, it } from "vitest";
+import { installerWithTeam } from "./helpers/fixtures";
+import { choices, planningSetup } from "./helpers/planning-fixtures";
+import * as plansNew from "~/routes/plans-new";
+import * as plan from "~/routes/plan";
+import * as plansApi from "~/routes/api.v1.plans";
+import * as planApi from "~/routes/api.v1.plan";
+import * as previewApi from "~/routes/api.v1.plans-preview";
+import { db } from "~/server/db.server";
+import type { KitPlan } from "~/domain/sizing/plan-types";
+
+async function api(mod: { loader?: Function; action?: Function }, kind: "loader" | "action", client: { cookieHeader(): string }, path: string, body?: unknown, params: Record<string, string> = {}) {
+  const request = new Request(`http://127.0.0.1:3999${path}`, {
+    method: kind === "action" ? "POST" : "GET",
+    headers: { "Content-Type": "application/json", Cookie: client.cookieHeader() },
+    body: kind === "action" ? JSON.stringify(body) : undefined,
+  });
+  try {
+    const res = (await mod[kind]!({ request, params, context: {} })) as Response;
+    return { status: res.status, body: await res.json() };
+  } catch (thrown) {
+    if (!(thrown instanceof Response)) throw thrown;
+    return { status: thrown.status, body: await thrown.json().catch(() => null) };
+  }
+}
+
+describe("kit plans", () => {
+  it("previews, saves with a snapshot, and reads back through the page and the API", async () => {
+    const a = await installerWithTeam("plan-a");
+    const setup = await planningSetup(a.teamId);
+    const preview = await api(previewApi, "action", a.client, "/api/v1/plans/preview", choices(setup));
+    expect(preview.status, JSON.stringify(preview.body)).toBe(200);
+    const previewPlan = preview.body.plan as KitPlan;
+    expect(previewPlan.array.layout.moduleCount).toBeGreaterThan(0);
+    expect(previewPlan.simulation.days.stateOfChargePct).toHaveLength(365);
+    expect(previewPlan.cautions.join(" ")).toMatch(/licensed/i);
+
+    const saved = await a.client.action(plansNew, "/plans/new", { choices: JSON.stringify(choices(setup)) });
+    expect(saved.status, JSON.stringify(saved.data)).toBe(302);
+    const planId = saved.location!.split("/").pop()!;
+    const page = await a.client.loader(plan, `/plans/${planId}`, { planId });
+    expect(page.data.revision.number).toBe(1);
+    expect(page.data.changes, page.data.changes.join(" | ")).toEqual([]);
+    expect(page.data.revision.result.array.layout.moduleCount).toBe(previewPlan.array.layout.moduleCount);
+
+    const read = await api(planApi, "loader", a.client, `/api/v1/plans/${planId}`, undefined, { planId });
+    expect(read.body.inputs.parts.module.pmaxW).toBe(330);
+    expect(read.body.history).toHaveLength(1);
+  });
+
+  it("keeps the saved snapshot when the catalogue changes, says what changed, and re-plans on request", async () => {
+    const a = await installerWithTeam("plan-snap");
+    const setup = await planningSetup(a.teamId);
+    const saved = await a.client.action(plansNew, "/plans/new", { choices: JSON.stringify(choices(setup)) });
+    const planId = saved.location!.split("/").pop()!;
+    const before = (await a.client.loader(plan, `/plans/${planId}`, { planId })).data.revision.result as KitPlan;
+
+    // Field readings verify the module at 85 % of nameplate.
+    await db.updateTable("pv_module").set({ verified_pmax_w: 280.5, verified_reading_count: 5 }).where("id", "=", setup.moduleId).execute();
+    const page = await a.client.loader(plan, `/plans/${planId}`, { planId });
+    expect(page.data.revision.result).toEqual(before);
+    expect(page.data.changes.join(" ")).toMatch(/verified power: none from 0 readings → 280\.5 W from 5 readings/);
+
+    const replanned = await a.client.action(plan, `/plans/${planId}`, { intent: "replan-current" }, { planId });
+    expect(replanned.status).toBe(302);
+    const after = await a.client.loader(plan, `/plans/${planId}`, { planId });
+    expect(after.data.revision.number).toBe(2);
+    expect(after.data.revision.note).toMatch(/current/);
+    expect(after.data.changes).toEqual([]);
+    expect(after.data.revision.result.array.modulePmaxUsedW).toBeCloseTo(280.5, 5);
+    const old = await a.client.loader(plan, `/plans/${planId}?revision=1`, { planId });
+    expect(old.data.revision.result).toEqual(before);
+  });
+
+  it("accepts a failing safety check only with a reason, and never a passing one", async () => {
+    const a = await installerWithTeam("plan-override");
+    const setup = await planningSetup(a.teamId);
+    // Six 40.6 V modules in series: about 270 V on a cold morning on a 150 V controller.
+    const forced = choices(setup, {}, { modulesInSeries: 6, stringsInParallel: 1 });
+    const saved = await a.client.action(plansNew, "/plans/new", { choices: JSON.stringify(forced) });
+    const planId = saved.location!.split("/").pop()!;
+    const page = await a.client.loader(plan, `/plans/${planId}`, { planId });
+    const result = page.data.revision.result as KitPlan;
+    const failing = result.checks.filter((c) => c.kind === "safety" && c.status === "fail");
+    expect(failing.map((c) => c.id)).toContain("array.voc-cold");
+    const row = await db.selectFrom("kit_plan_revision").select("failing_safety_checks").where("plan_id", "=", planId).executeTakeFirstOrThrow();
+    expect(row.failing_safety_checks).toBe(failing.length);
+
+    expect((await a.client.action(plan, `/plans/${planId}`, { intent: "override", checkId: "array.voc-cold", reason: "ok" }, { planId })).status).toBe(400);
+    const passing = result.checks.find((c) => c.status === "pass")!;
+    expect((await a.client.action(plan, `/plans/${planId}`, { intent: "override", checkId: passing.id, reason: "A long enough reason here." }, { planId })).status).toBe(400);
+    const ok = await a.client.action(plan, `/plans/${planId}`, { intent: "override", checkId: "array.voc-cold", reason: "Site never below −5 °C: heated plant room, checked by the engineer." }, { planId });
+    expect(ok.status).toBe(302);
+    const overrides = (await a.client.loader(plan, `/plans/${planId}`, { planId })).data.revision.overrides;
+    expect(overrides).toEqual([expect.objectContaining({ checkId: "array.voc-cold", byName: "Test plan-override" })]);
+
+    // A layout of 3 in series turns the failing check green in a new revision.
+    const fixed = await a.client.action(plan, `/plans/${planId}`, { intent: "save-revision", note: "Shorter strings", choices: JSON.stringify(choices(setup, {}, { modulesInSeries: 3, stringsInParallel: 2 })) }, { planId });
+    expect(fixed.status, JSON.stringify(fixed.data)).toBe(302);
+    const green = (await a.client.loader(plan, `/plans/${planId}`, { planId })).data.revision.result as KitPlan;
+    expect(green.checks.find((c) => c.id === "array.voc-cold")!.status).toBe("pass");
+  });
+
+  it("refuses bad choices at the field and saves nothing", async () => {
+    const a = await installerWithTeam("plan-bad");
+    const setup = await planningSetup(a.teamId);
+    const other = await planningSetup(a.teamId);
+    const result = await a.client.action(plansNew, "/plans/new", {
+      choices: JSON.stringify(choices(setup, { loadSheetId: other.loadSheetId, moduleId: "00000000-0000-0000-0000-000000000000" })),
+    });
+    expect(result.status).toBe(400);
+    expect(result.data.errors).toMatchObject({ loadSheetId: expect.stringMatching(/this site/), moduleId: expect.stringMatching(/No such module/) });
+    const typo = await a.client.action(plansNew, "/plans/new", { choices: JSON.stringify(choices(setup, {}, { autonomyDays: 0, arrayToControllerM: "far" })) });
+    expect(typo.data.errors).toMatchObject({ "design.autonomyDays": expect.stringMatching(/at least 0.5/), "design.arrayToControllerM": expect.stringMatching(/number/) });
+    expect((await a.client.action(plansNew, "/plans/new", { choices: "{broken" })).status).toBe(400);
+    expect(await db.selectFrom("kit_plan").select("id").where("team_id", "=", a.teamId).execute()).toHaveLength(0);
+  });
+
+  it("is invisible to another team in pages and the API", async () => {
+    const a = await installerWithTeam("plan-own");
+    const b = await installerWithTeam("plan-other");
+    const setup = await planningSetup(a.teamId);
+    const saved = await a.client.action(plansNew, "/plans/new", { choices: JSON.stringify(choices(setup)) });
+    const planId = saved.location!.split("/").pop()!;
+    expect((await b.client.loader(plan, `/plans/${planId}`, { planId })).status).toBe(404);
+    expect((await b.client.action(plan, `/plans/${planId}`, { intent: "replan-current" }, { planId })).status).toBe(404);
+    expect((await api(planApi, "loader", b.client, `/api/v1/plans/${planId}`, undefined, { planId })).status).toBe(404);
+    expect((await api(plansApi, "loader", b.client, "/api/v1/plans")).body.total).toBe(0);
+    // Team B cannot plan on team A's site either.
+    const sneaky = await api(previewApi, "action", b.client, "/api/v1/plans/preview", choices(setup));
+    expect(sneaky.status).toBe(400);
+    expect(sneaky.body.error.fields.siteId).toMatch(/No such site/);
+  });
+});

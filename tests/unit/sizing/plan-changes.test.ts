@@ -1,0 +1,38 @@
+import { describe, expect, it } from "vitest";
+import { describeInputChanges, describeResultChanges, differs } from "~/domain/sizing/plan-changes";
+import { planKit } from "~/domain/sizing/kit-plan";
+import { hutPlanInput } from "./plan-fixtures";
+
+const base = () => hutPlanInput();
+
+describe("what changed since a plan was saved", () => {
+  it("says nothing when nothing changed", () => {
+    const input = base();
+    expect(describeInputChanges(input, base())).toEqual([]);
+    expect(describeResultChanges(planKit(input), planKit(base()))).toEqual([]);
+  });
+
+  it("ignores key order and absent keys, as a snapshot read back from jsonb has them", () => {
+    const input = base();
+    const reordered = JSON.parse(JSON.stringify({ appliances: input.appliances, parts: input.parts, site: input.site, design: input.design, systemVoltageV: input.systemVoltageV }));
+    const reversedSite = Object.fromEntries(Object.entries(reordered.site).reverse());
+    expect(describeInputChanges(input, { ...reordered, site: reversedSite })).toEqual([]);
+  });
+
+  it("names a module's new verified power, a colder site and a changed load", () => {
+    const saved = base();
+    const current = base();
+    current.parts.module = { ...current.parts.module, verifiedPmaxW: 81.5, verifiedReadingCount: 4 };
+    current.site = { ...current.site, coldestTempC: current.site.coldestTempC - 10 };
+    current.appliances = [...current.appliances, { name: "Radio", powerW: 10, quantity: 1, hoursPerDay: 2, daysPerWeek: 7, circuit: "dc" }];
+    const changes = describeInputChanges(saved, current).join(" ");
+    expect(changes).toMatch(/verified power: .* → 81\.5 W from 4 readings/);
+    expect(changes).toMatch(/Coldest expected temperature/);
+    expect(changes).toMatch(/load sheet changed/);
+  });
+
+  it("still sees a real difference deep inside", () => {
+    expect(differs({ a: [1, { b: 2 }] }, { a: [1, { b: 3 }] })).toBe(true);
+    expect(differs({ a: 1, b: undefined }, { a: 1 })).toBe(false);
+  });
+});
