@@ -1,0 +1,143 @@
+// Compare the team's valid offers for one kind of part: modules per nameplate and per verified watt,
+// batteries per usable and per cycled kWh, controllers and inverters by headroom, all with the landed
+// cost for the quantity in the quoting currency. What to compare for sits in the URL (and, once kit
+// plans exist, can come from a plan), as does the sort.
+import { Link, useSearchParams, type ShouldRevalidateFunctionArgs } from "react-router";
+import type { Route } from "./+types/sourcing.compare";
+import { PageHeader, Panel } from "~/components/page-header";
+import { CompareTable, type SortChoice } from "~/components/sourcing/compare-table";
+import { moduleCompareColumns, MODULE_NUMERIC } from "~/components/sourcing/module-compare-columns";
+import { NeedForm } from "~/components/sourcing/need-form";
+import { BATTERY_NUMERIC, batteryCompareColumns, CONTROLLER_NUMERIC, controllerCompareColumns, INVERTER_NUMERIC, inverterCompareColumns } from "~/components/sourcing/part-compare-columns";
+import { SourcingTabs } from "~/components/sourcing/sourcing-tabs";
+import { requiredArrayPowerW } from "~/domain/sourcing/array-need";
+import type { ModuleComparisonRow } from "~/domain/sourcing/module-rows";
+import { isOfferPartKind, OFFER_PART_KINDS, type OfferPartKind } from "~/domain/sourcing/offer-facts";
+import type { BatteryComparisonRow, ControllerComparisonRow, InverterComparisonRow } from "~/domain/sourcing/part-rows";
+import { needFromSearchParams } from "~/lib/sourcing-compare-need";
+import { db } from "~/server/db.server";
+import { requireTeamMember } from "~/server/guards.server";
+import { compareOffers } from "~/server/sourcing/comparison.server";
+
+const TITLES: Record<OfferPartKind, string> = { modules: "Modules", batteries: "Batteries", controllers: "Charge controllers", inverters: "Inverters" };
+
+export const meta: Route.MetaFunction = ({ params }) => [{ title: `Compare ${isOfferPartKind(params.kind) ? TITLES[params.kind].toLowerCase() : "offers"} · Sourcing · Kitwright` }];
+
+export async function loader({ request, params }: Route.LoaderArgs) {
+  const { team } = await requireTeamMember(request);
+  if (!isOfferPartKind(params.kind)) throw new Response("There is no such kind of part to compare.", { status: 404 });
+  const url = new URL(request.url);
+  const { need, values, errors } = needFromSearchParams(params.kind, url.searchParams);
+  const comparison = await compareOffers(db, team.teamId, params.kind, need);
+  return { kind: params.kind, values, errors, comparison };
+}
+
+/** Sorting happens in the browser: a change of sort alone needs no new data. */
+export function shouldRevalidate({ currentUrl, nextUrl, defaultShouldRevalidate }: ShouldRevalidateFunctionArgs) {
+  if (currentUrl.pathname !== nextUrl.pathname) return defaultShouldRevalidate;
+  const strip = (u: URL) => {
+    const p = new URLSearchParams(u.search);
+    p.delete("sort");
+    p.delete("dir");
+    p.sort();
+    return p.toString();
+  };
+  return strip(currentUrl) !== strip(nextUrl) ? defaultShouldRevalidate : false;
+}
+
+function NeedSummary({ kind, need }: { kind: OfferPartKind; need: Route.ComponentProps["loaderData"]["comparison"]["need"] }) {
+  if (kind === "modules") {
+    if (need.quantity !== null) return <>{need.quantity} modules of each offer.</>;
+    const arrayW = requiredArrayPowerW(need.arrayEnergyWhPerDay, need.sunHoursPerDay, need.systemLossesPct);
+    return (
+      <>
+        {(need.arrayEnergyWhPerDay / 1000).toLocaleString("en-GB")} kWh a day at {need.sunHoursPerDay} sun hours with {need.systemLossesPct} % losses needs{" "}
+        <strong className="figures">{Math.round(arrayW).toLocaleString("en-GB")} W</strong> of array at STC; each module is counted on its verified power where readings exist, else on its nameplate (a peak-sun-hours estimate — common practice, no source).
+      </>
+    );
+  }
+  if (kind === "batteries") return <>{need.quantity} batteries of each offer.</>;
+  if (kind === "controllers") return <>{need.quantity} controller(s), for a {need.arrayPowerW.toLocaleString("en-GB")} W array on a {need.batteryVoltageV} V bank.</>;
+  return <>{need.quantity} inverter(s), for a {need.peakAcLoadW.toLocaleString("en-GB")} W peak AC load on a {need.batteryVoltageV} V bank.</>;
+}
+
+export default function Compare({ loaderData }: Route.ComponentProps) {
+  const { kind, comparison, values, errors } = loaderData;
+  const [params, setParams] = useSearchParams();
+  const sort: SortChoice = { id: params.get("sort") ?? "landed", desc: params.get("dir") === "desc" };
+  const onSort = (choice: SortChoice) =>
+    setParams(
+      (prev) => {
+        const next = new URLSearchParams(prev);
+        next.set("sort", choice.id);
+        next.set("dir", choice.desc ? "desc" : "asc");
+        return next;
+      },
+      { replace: true, preventScrollReset: true },
+    );
+  const need = Object.fromEntries([...params].filter(([k]) => k !== "sort" && k !== "dir"));
+  const keep = new URLSearchParams(need).toString();
+  const caption = `${TITLES[kind]} offers compared, in ${comparison.pricing.quotingCurrency}`;
+  const rows = comparison.rows;
+  return (
+    <>
+      <PageHeader
+        title={`Compare ${TITLES[kind].toLowerCase()}`}
+        lead={`Your team's valid offers, priced in ${comparison.pricing.quotingCurrency} on ${comparison.pricing.asOf} with your own exchange rates. Click a column heading to rank by it.`}
+      />
+      <SourcingTabs />
+      <nav aria-label="Kind of part" className="mb-4 flex flex-wrap gap-1 text-sm">
+        {OFFER_PART_KINDS.map((k) => (
+          <Link key={k} to={`/sourcing/compare/${k}${keep ? `?${keep}` : ""}`} aria-current={k === kind ? "page" : undefined} className={`rounded px-3 py-1.5 ${k === kind ? "bg-copper-wash font-medium" : "text-ink-soft hover:text-ink"}`}>
+            {TITLES[k]}
+          </Link>
+        ))}
+      </nav>
+      <div className="space-y-4">
+        <Panel title="Compare for">
+          <NeedForm kind={kind} values={values} errors={errors} sort={{ id: sort.id, dir: sort.desc ? "desc" : "asc" }} />
+          <p className="mt-3 text-sm text-ink-soft" data-testid="need-summary">
+            <NeedSummary kind={kind} need={comparison.need} /> Until kit plans can be chosen here, type the figures; they stay in the page address.
+          </p>
+        </Panel>
+        {comparison.expiredCount ? (
+          <p className="rounded-md bg-warn-wash px-3 py-2 text-sm text-warn" role="note">
+            <span aria-hidden="true">⚠</span> {comparison.expiredCount} expired offer{comparison.expiredCount === 1 ? " is" : "s are"} left out.{" "}
+            <Link to={`/sourcing?kind=${kind}`} className="underline">
+              See them in the offer list
+            </Link>
+            .
+          </p>
+        ) : null}
+        <Panel>
+          {kind === "modules" ? (
+            <CompareTable columns={moduleCompareColumns()} data={rows as ModuleComparisonRow[]} sort={sort} onSort={onSort} caption={caption} numericColumns={MODULE_NUMERIC} />
+          ) : kind === "batteries" ? (
+            <CompareTable columns={batteryCompareColumns()} data={rows as BatteryComparisonRow[]} sort={sort} onSort={onSort} caption={caption} numericColumns={BATTERY_NUMERIC} />
+          ) : kind === "controllers" ? (
+            <CompareTable columns={controllerCompareColumns(comparison.need.batteryVoltageV, comparison.need.arrayPowerW)} data={rows as ControllerComparisonRow[]} sort={sort} onSort={onSort} caption={caption} numericColumns={CONTROLLER_NUMERIC} />
+          ) : (
+            <CompareTable columns={inverterCompareColumns(comparison.need.batteryVoltageV, comparison.need.peakAcLoadW)} data={rows as InverterComparisonRow[]} sort={sort} onSort={onSort} caption={caption} numericColumns={INVERTER_NUMERIC} />
+          )}
+          <Footnotes kind={kind} />
+        </Panel>
+      </div>
+    </>
+  );
+}
+
+function Footnotes({ kind }: { kind: OfferPartKind }) {
+  return (
+    <ul className="mt-4 space-y-1 text-xs text-ink-faint">
+      {kind === "modules" ? (
+        <>
+          <li>Price per watt = unit price at the quantity bought ÷ the module's power. Verified power is the median of the catalogue's approved field readings, normalised to STC; "no readings" means nameplate only.</li>
+          <li>Measured W/m² = verified power ÷ the module's outline area; area needed = modules × outline area.</li>
+        </>
+      ) : null}
+      {kind === "batteries" ? <li>Usable kWh = nominal V × capacity Ah × usable depth of discharge. Price per cycled kWh = unit price ÷ (usable kWh × rated cycles): purchase price only, before charging losses and ageing.</li> : null}
+      {kind === "controllers" ? <li>Charge current ≈ array power ÷ bank voltage (cautious: conversion losses ignored). The string's cold-morning Voc against the controller's limit is checked in the kit plan.</li> : null}
+      <li>Landed = goods at the price break for the quantity bought (raised to the minimum order) + shipping per unit and per order, each rounded once; converted totals are rounded once more. Expired offers are left out.</li>
+    </ul>
+  );
+}
