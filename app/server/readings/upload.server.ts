@@ -1,0 +1,33 @@
+// Multipart bodies with a hard size limit: the declared Content-Length is checked before anything is
+// read, and the stream is counted as it arrives, so a client that lies or streams without a length
+// still cannot make the server buffer more than the limit.
+import { PHOTO_MAX_BYTES } from "~/lib/image-type";
+
+/** A 5 MB photo plus the CSV and the fields fit well under this. */
+export const MAX_UPLOAD_BYTES = PHOTO_MAX_BYTES + 1024 * 1024;
+
+export class UploadTooLargeError extends Error {
+  constructor(readonly limitBytes: number) {
+    super(`The upload is larger than ${Math.round(limitBytes / (1024 * 1024))} MB.`);
+  }
+}
+
+export async function readLimitedFormData(request: Request, maxBytes = MAX_UPLOAD_BYTES): Promise<FormData> {
+  const declared = Number(request.headers.get("Content-Length") ?? "");
+  if (Number.isFinite(declared) && declared > maxBytes) throw new UploadTooLargeError(maxBytes);
+  if (!request.body) return request.formData();
+  const reader = request.body.getReader();
+  const chunks: Uint8Array[] = [];
+  let total = 0;
+  for (;;) {
+    const { done, value } = await reader.read();
+    if (done) break;
+    total += value.byteLength;
+    if (total > maxBytes) {
+      await reader.cancel();
+      throw new UploadTooLargeError(maxBytes);
+    }
+    chunks.push(value);
+  }
+  return new Request(request.url, { method: request.method, headers: request.headers, body: Buffer.concat(chunks) }).formData();
+}
