@@ -1,0 +1,58 @@
+// Kit alternatives as the page and the API show them: totals as exact decimal texts in the quoting
+// currency (from integer minor units), never JavaScript floats.
+import Decimal from "decimal.js";
+import { minorDigits } from "~/domain/money/money";
+import type { AlternativesResult, ChosenPart } from "~/domain/sourcing/alternatives/types";
+
+export function minorToText(minor: number, currency: string): string {
+  const digits = minorDigits(currency);
+  return new Decimal(minor).div(new Decimal(10).pow(digits)).toFixed(digits);
+}
+
+function partJson(p: ChosenPart, currency: string) {
+  return { id: p.id, label: p.label, quantity: p.quantity, offerId: p.offerId, supplierName: p.supplierName, landedCost: minorToText(p.costMinor, currency) };
+}
+
+export function alternativesJson(found: {
+  planId: string;
+  revision: number;
+  result: AlternativesResult | null;
+  offerCount: number;
+  ratesUsed: { from: string; to: string; rate: string; asOf: string }[];
+  searchMs: number;
+}) {
+  const r = found.result;
+  if (!r) return null;
+  const c = r.currency;
+  return {
+    planId: found.planId,
+    revision: found.revision,
+    currency: c,
+    offersUsed: found.offerCount,
+    ratesUsed: found.ratesUsed,
+    considered: r.considered,
+    dominatedOfferCombinations: r.dominatedOfferCombinations,
+    pruned: r.pruned,
+    fullChecks: r.fullChecks,
+    fullCheckFailures: r.fullCheckFailures,
+    exhausted: r.exhausted,
+    searchMs: Math.round(found.searchMs * 10) / 10,
+    lifetimeNote: r.lifetimeNote,
+    alternatives: r.alternatives.map((a, i) => ({
+      rank: i + 1,
+      totalLandedCost: minorToText(a.totalMinor, c),
+      costPerDeliveredKWh: a.costPerKWh,
+      lifetimeYears: Math.round(a.lifetimeYears * 100) / 100,
+      deliveredKWhPerYear: Math.round(a.deliveredKWhPerYear * 10) / 10,
+      module: partJson(a.module, c),
+      controller: partJson(a.controller, c),
+      battery: partJson(a.battery, c),
+      inverter: a.inverter ? partJson(a.inverter, c) : null,
+      layout: a.layout,
+      batteryStrings: a.batteryStrings,
+      warnings: a.warnings,
+      differences: a.differences,
+      sameParts: a.isCurrentParts,
+    })),
+  };
+}
