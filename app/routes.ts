@@ -14,7 +14,19 @@ export default [
   route("admin/users", "routes/admin-users.tsx"),
   route("yield", "routes/yield.tsx"),
   // — catalogue (issue 4) —
+  route("catalogue", "routes/catalogue.tsx"),
+  route("catalogue/import", "routes/catalogue.import.tsx"),
+  // Listed before modules/:moduleId so that /catalogue/modules/new is the new-module form.
+  route("catalogue/:kind/new", "routes/catalogue.part-new.tsx"),
+  route("catalogue/:kind/:partId/edit", "routes/catalogue.part-edit.tsx"),
+  route("catalogue/modules/:moduleId", "routes/catalogue.module.tsx"),
+  route("catalogue/modules/:moduleId/merge", "routes/catalogue.module-merge.tsx"),
   // — field readings and review (issue 4) —
+  route("readings", "routes/readings.tsx"),
+  route("readings/new", "routes/readings-new.tsx"),
+  route("readings/:readingId", "routes/reading.tsx"),
+  route("review", "routes/review.tsx"),
+  route("files/:fileId", "routes/files.$fileId.ts"),
   // — sites, load sheets and kit plans (issue 5) —
   route("sites", "routes/sites.tsx"),
   route("sites/new", "routes/sites-new.tsx"),
@@ -24,6 +36,17 @@ export default [
   route("plans", "routes/plans.tsx"),
   route("plans/new", "routes/plans-new.tsx"),
   route("plans/:planId", "routes/plan.tsx"),
+  route("plans/:planId/alternatives", "routes/plan-alternatives.tsx"),
+  // — sourcing (issue 6) —
+  route("sourcing", "routes/sourcing.tsx"),
+  route("sourcing/suppliers/new", "routes/sourcing.supplier-new.tsx"),
+  route("sourcing/suppliers/:supplierId", "routes/sourcing.supplier.tsx"),
+  route("sourcing/offers/new", "routes/sourcing.offer-new.tsx"),
+  route("sourcing/offers/:offerId", "routes/sourcing.offer.tsx"),
+  route("sourcing/import", "routes/sourcing.import.tsx"),
+  route("sourcing/export", "routes/sourcing.export.ts"),
+  route("sourcing/rates", "routes/sourcing.rates.tsx"),
+  route("sourcing/compare/:kind", "routes/sourcing.compare.tsx"),
   route("dev/outbox", "routes/dev-outbox.tsx"),
   route("healthz", "routes/healthz.ts"),
   route("readyz", "routes/readyz.ts"),
@@ -33,12 +56,20 @@ export default [
     route("yield", "routes/api.v1.yield.ts"),
     route("modules", "routes/api.v1.modules.ts"),
     // — API: catalogue and readings (issue 4) —
+    route("readings", "routes/api.v1.readings.ts"),
+    route("readings/preview", "routes/api.v1.readings.preview.ts"),
+    route("modules/:moduleId", "routes/api.v1.modules.$moduleId.ts"),
     // — API: sites and plans (issue 5) —
     route("sites", "routes/api.v1.sites.ts"),
     route("sites/:siteId", "routes/api.v1.site.ts"),
     route("plans", "routes/api.v1.plans.ts"),
     route("plans/preview", "routes/api.v1.plans-preview.ts"),
     route("plans/:planId", "routes/api.v1.plan.ts"),
+    route("plans/:planId/alternatives", "routes/api.v1.plans.$planId.alternatives.ts"),
+    // — API: sourcing (issue 6) —
+    route("offers", "routes/api.v1.offers.ts"),
+    route("offers/import", "routes/api.v1.offers.import.ts"),
+    route("offers/:offerId", "routes/api.v1.offer.ts"),
     route("*", "routes/api.v1.not-found.ts"),
   ]),
   route("*", "routes/not-found.tsx"),

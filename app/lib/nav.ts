@@ -8,9 +8,13 @@ export interface NavItem {
 }
 
 export const NAV_ITEMS: NavItem[] = [
+  { label: "Catalogue", to: "/catalogue", roles: ["installer", "curator", "admin"] },
   { label: "Site yield", to: "/yield", roles: ["installer", "curator", "admin"] },
+  { label: "Field readings", to: "/readings", roles: ["installer"] },
+  { label: "Review", to: "/review", roles: ["curator"] },
   { label: "Sites", to: "/sites", roles: ["installer"] },
   { label: "Kit plans", to: "/plans", roles: ["installer"] },
+  { label: "Sourcing", to: "/sourcing", roles: ["installer"] },
   { label: "Team", to: "/team", roles: ["installer"] },
   { label: "Users", to: "/admin/users", roles: ["admin"] },
 ];

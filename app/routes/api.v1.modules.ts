@@ -1,23 +1,19 @@
-// GET /api/v1/modules — the shared catalogue's modules (search and paging).
+// GET /api/v1/modules — the shared catalogue's modules: search (q), filters (technology, minW, maxW,
+// hasReadings, ratioBelow), sort (sort, dir) and paging (limit, offset). Answers { items, total };
+// a bad parameter is a 400 naming it. Merged duplicates are left out.
 import type { Route } from "./+types/api.v1.modules";
+import { listModulePage } from "~/server/catalogue/module-list.server";
+import { db } from "~/server/db.server";
 import { requireApiActor } from "~/server/guards.server";
-import { listModules } from "~/server/modules.server";
-
-function intParam(url: URL, name: string, fallback: number, min: number, max: number) {
-  const raw = url.searchParams.get(name);
-  if (raw === null) return fallback;
-  const value = Number(raw);
-  if (!Number.isInteger(value) || value < min || value > max) {
-    throw Response.json({ error: { message: `${name} must be a whole number from ${min} to ${max}.`, fields: { [name]: "out of range" } } }, { status: 400 });
-  }
-  return value;
-}
+import { jsonError } from "~/server/json-body.server";
+import { parsePartQuery } from "~/lib/catalogue-query";
 
 export async function loader({ request }: Route.LoaderArgs) {
   await requireApiActor(request);
-  const url = new URL(request.url);
-  const search = (url.searchParams.get("q") ?? "").trim().slice(0, 100);
-  const limit = intParam(url, "limit", 50, 1, 200);
-  const offset = intParam(url, "offset", 0, 0, 1_000_000);
-  return Response.json(await listModules({ search, limit, offset }));
+  const parsed = parsePartQuery("modules", new URL(request.url).searchParams);
+  if (!parsed.ok) {
+    const count = Object.keys(parsed.fields).length;
+    return jsonError(400, `${count} query parameter${count === 1 ? " needs" : "s need"} attention.`, parsed.fields);
+  }
+  return Response.json(await listModulePage(db, parsed.query));
 }

@@ -15,6 +15,7 @@ export async function loader({ request }: Route.LoaderArgs) {
 }
 
 const SECTION_TEXT: Record<string, string> = {
+  "/catalogue": "Modules, batteries, controllers and inverters; nameplate against verified watts from field readings.",
   "/yield": "Energy per module per month at a site, from latitude, tilt, azimuth and the monthly climate.",
   "/team": "Members, invitations and API keys for integrations.",
   "/admin/users": "Every account and its role.",

@@ -94,6 +94,13 @@ export default function PlanPage({ loaderData, actionData }: Route.ComponentProp
             {l.isLatest ? " (latest)" : ""} · {l.revision.note} · <Link to={`/sites/${l.siteId}`} className="underline">the site</Link>
           </>
         }
+        actions={
+          l.isLatest ? (
+            <Link to={`/plans/${l.planId}/alternatives`} className="text-sm font-medium text-copper underline">
+              Cheaper kits from your offers →
+            </Link>
+          ) : undefined
+        }
       />
       {!l.isLatest ? (
         <p className="mb-4 rounded-lg border border-rule bg-sheet p-3 text-sm">

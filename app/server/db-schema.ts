@@ -2,6 +2,8 @@
 // Kitwright's own tables use snake_case.
 import type { ColumnType, Generated, GeneratedAlways, Selectable } from "kysely";
 import type { PlanningTables } from "./db-schema-planning";
+import type { SourcingTables } from "./db-schema-sourcing";
+import type { ReadingWorking } from "~/domain/readings/normalise-reading";
 
 type Timestamp = ColumnType<Date, Date | string | undefined, Date | string>;
 
@@ -72,7 +74,7 @@ export interface TeamApiKeyTable {
   revoked_at: Timestamp | null;
 }
 
-export interface Database extends PlanningTables {
+export interface Database extends PlanningTables, SourcingTables {
   user: UserTable;
   session: SessionTable;
   organization: OrganizationTable;
@@ -106,6 +108,8 @@ export interface PvModuleTable {
   beta_voc_pct_per_c: number;
   alpha_isc_pct_per_c: number;
   noct_c: number;
+  /** Added by migration 2026-12-01T0110: whether noct_c holds a NOCT or an NMOT. */
+  nominal_temp_kind: Generated<"noct" | "nmot">;
   length_mm: number;
   width_mm: number;
   mass_kg: number;
@@ -121,6 +125,8 @@ export interface PvModuleTable {
   nameplate_density_wm2: GeneratedAlways<number>;
   measured_density_wm2: GeneratedAlways<number | null>;
   verified_ratio: GeneratedAlways<number | null>;
+  /** lower(maker || ' ' || model), for search (migration 2026-12-01T0111). */
+  search_text: GeneratedAlways<string>;
 }
 
 export type PvModule = Selectable<PvModuleTable>;
@@ -170,7 +176,7 @@ export interface StoredFileTable {
   byte_size: number;
   sha256: string;
   bytes: Buffer;
-  created_at: Generated<Timestamp>;
+  created_at: Timestamp;
 }
 
 export interface ReadingFlag {
@@ -214,7 +220,11 @@ export interface FieldReadingTable {
   uncertainty_pct: number;
   weight: Generated<number>;
   flags: ColumnType<ReadingFlag[], string | undefined, string>;
-  created_at: Generated<Timestamp>;
+  created_at: Timestamp;
+  /** Added by migration 2026-12-01T0150 (field-reading details). */
+  utc_offset_min: number | null;
+  sweep_duration_s: number | null;
+  normalisation: ColumnType<ReadingWorking | Record<string, never>, string | undefined, string>;
 }
 
 export interface ReadingDecisionTable {
@@ -223,5 +233,5 @@ export interface ReadingDecisionTable {
   decided_by: string | null;
   decision: "approved" | "rejected";
   reason: string;
-  decided_at: Generated<Timestamp>;
+  decided_at: Timestamp;
 }

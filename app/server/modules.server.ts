@@ -8,7 +8,8 @@ export function isUuid(value: string) {
 }
 
 export async function listModules({ search, limit, offset }: { search: string; limit: number; offset: number }) {
-  let query = db.selectFrom("pv_module");
+  // Merged duplicates are hidden: their readings and their users moved to the model that stayed.
+  let query = db.selectFrom("pv_module").where("merged_into", "is", null);
   if (search) {
     const pattern = `%${search.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
     query = query.where((eb) => eb.or([eb("maker", "ilike", pattern), eb("model", "ilike", pattern)]));

@@ -23,6 +23,9 @@ console.log("\n━━ Field readings (pure TypeScript, one core)");
 console.log("\n━━ Sourcing (pure TypeScript, one core)");
 (await import("./sourcing")).printSourcingBench();
 
+console.log("\n━━ Kit alternatives (pure TypeScript, one core)");
+(await import("./alternatives")).printAlternativesBench();
+
 console.log(`\n━━ HTTP (autocannon, 32 connections, ${seconds} s per run)`);
 const stack = await bootBenchStack();
 try {

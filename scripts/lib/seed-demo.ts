@@ -34,6 +34,9 @@ export async function seedDemo(log: (line: string) => void = () => {}) {
   }
   const { seedDemoCatalogue } = await import("./seed-catalogue");
   await seedDemoCatalogue(db, log);
+  await (await import("./seed-readings")).seedDemoReadings(db, log);
+  await (await import("./seed-sourcing")).seedDemoSourcing(db, log);
+  await (await import("./seed-planning")).seedDemoPlanning(log);
 }
 
 /** Seeds only a database with no users yet, so `npm start` never overwrites someone's work. */

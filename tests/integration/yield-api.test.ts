@@ -81,6 +81,11 @@ describe("POST /api/v1/yield", () => {
     expect(byId.status).toBe(200);
     expect(byId.body.annualKWh).toBeCloseTo(byFigures.body.annualKWh, 6);
     expect(byId.body.assumptions.join(" ")).toContain("Test Maker");
+    // Verified power (85 % of nameplate from 4 readings) lowers the energy in proportion, and says so.
+    await db.updateTable("pv_module").set({ verified_pmax_w: 85, verified_reading_count: 4 }).where("id", "=", module.id).execute();
+    const verified = await post(new RouteClient(), { ...madisonBody(), module: { moduleId: module.id }, powerBasis: "verified" }, { Authorization: `Bearer ${created.data.created.key}` });
+    expect(verified.body.annualKWh / byId.body.annualKWh).toBeCloseTo(0.85, 2);
+    expect(verified.body.assumptions.join(" ")).toMatch(/verified 85\.0 W at STC from 4 approved field reading/);
     const unknown = await post(new RouteClient(), { ...madisonBody(), module: { moduleId: "00000000-0000-0000-0000-000000000000" } }, { Authorization: `Bearer ${created.data.created.key}` });
     expect(unknown.status).toBe(400);
     expect(unknown.body.error.fields["module.moduleId"]).toMatch(/No module/);
