@@ -12,13 +12,14 @@ export function renderCheckoutPage(record: SessionRecord, state: PageState = {})
   const { session, lineItems } = record;
   const total = formatAmount(session.amount_total, session.currency);
   const rows = lineItems
-    .map((item) => `<tr><td>${escapeHtml(item.description)}${item.quantity > 1 ? ` × ${item.quantity}` : ""}</td>` +
-      `<td class="num">${formatAmount(item.amount_total, item.currency)}</td></tr>`)
+    .map(
+      (item) =>
+        `<tr><td>${escapeHtml(item.description)}${item.quantity > 1 ? ` × ${item.quantity}` : ""}</td>` +
+        `<td class="num">${formatAmount(item.amount_total, item.currency)}</td></tr>`,
+    )
     .join("");
   const values = state.values ?? {};
-  const message = state.message
-    ? `<p class="msg ${state.message.kind}" role="alert">${escapeHtml(state.message.text)}</p>`
-    : "";
+  const message = state.message ? `<p class="msg ${state.message.kind}" role="alert">${escapeHtml(state.message.text)}</p>` : "";
   const body =
     session.status === "open"
       ? cardForm(session.id, total, values, session.cancel_url)
@@ -73,10 +74,5 @@ export function formatAmount(minorUnits: number, currency: string): string {
 }
 
 export function escapeHtml(text: string): string {
-  return text
-    .replaceAll("&", "&amp;")
-    .replaceAll("<", "&lt;")
-    .replaceAll(">", "&gt;")
-    .replaceAll('"', "&quot;")
-    .replaceAll("'", "&#39;");
+  return text.replaceAll("&", "&amp;").replaceAll("<", "&lt;").replaceAll(">", "&gt;").replaceAll('"', "&quot;").replaceAll("'", "&#39;");
 }

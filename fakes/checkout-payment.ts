@@ -19,8 +19,7 @@ export const TEST_CARDS = {
 
 export const DECLINED_MESSAGE = "Your card was declined.";
 export const USE_TEST_CARD_MESSAGE =
-  `Use a test card: ${TEST_CARDS.succeeds} to pay, or ${TEST_CARDS.declined} to see a decline. ` +
-  "This page never charges a real card.";
+  `Use a test card: ${TEST_CARDS.succeeds} to pay, or ${TEST_CARDS.declined} to see a decline. ` + "This page never charges a real card.";
 
 export type PaymentResult =
   | { outcome: "succeeded"; session: CheckoutSession; event: StripeEvent }

@@ -2,32 +2,36 @@
 // payment step rely on. Checks mirror Stripe's messages where the fake knows them.
 import { invalidParam, missingParam, StripeFakeError } from "./stripe-errors.ts";
 import type { Params } from "./stripe-params.ts";
-import {
-  newId,
-  nowSeconds,
-  type CheckoutSession,
-  type LineItem,
-  type Metadata,
-  type SessionRecord,
-} from "./payments-state.ts";
+import { newId, nowSeconds, type CheckoutSession, type LineItem, type Metadata, type SessionRecord } from "./payments-state.ts";
 import { readLineItems } from "./checkout-line-items.ts";
 
 // Params the fake models, plus common ones it accepts and ignores. Anything else is logged,
 // not rejected: the fake cannot know every Stripe parameter, and real Stripe is the judge.
 const KNOWN_PARAMS = new Set([
-  "mode", "line_items", "success_url", "cancel_url", "customer_email", "client_reference_id",
-  "metadata", "expires_at", "payment_intent_data", "expand", "locale", "payment_method_types",
-  "submit_type", "billing_address_collection", "allow_promotion_codes", "customer_creation",
-  "phone_number_collection", "custom_text", "ui_mode",
+  "mode",
+  "line_items",
+  "success_url",
+  "cancel_url",
+  "customer_email",
+  "client_reference_id",
+  "metadata",
+  "expires_at",
+  "payment_intent_data",
+  "expand",
+  "locale",
+  "payment_method_types",
+  "submit_type",
+  "billing_address_collection",
+  "allow_promotion_codes",
+  "customer_creation",
+  "phone_number_collection",
+  "custom_text",
+  "ui_mode",
 ]);
 
 const DAY_SECONDS = 24 * 60 * 60;
 
-export function createSessionRecord(
-  params: Params,
-  baseUrl: string,
-  warn: (line: string) => void,
-): SessionRecord {
+export function createSessionRecord(params: Params, baseUrl: string, warn: (line: string) => void): SessionRecord {
   for (const key of Object.keys(params)) {
     if (!KNOWN_PARAMS.has(key)) warn(`payments fake: ignoring unmodelled parameter '${key}'`);
   }
@@ -79,18 +83,12 @@ export function createSessionRecord(
   };
   const intentData = params.payment_intent_data;
   const intentMetadata =
-    intentData && typeof intentData === "object" && !Array.isArray(intentData)
-      ? readMetadata(intentData.metadata, "payment_intent_data[metadata]")
-      : {};
+    intentData && typeof intentData === "object" && !Array.isArray(intentData) ? readMetadata(intentData.metadata, "payment_intent_data[metadata]") : {};
   return { session, lineItems, paymentIntentMetadata: intentMetadata };
 }
 
 /** Replaces ids with objects for `expand[]=line_items` / `expand[]=payment_intent`. */
-export function expandSession(
-  record: SessionRecord,
-  expand: unknown,
-  findIntent: (id: string) => unknown,
-): unknown {
+export function expandSession(record: SessionRecord, expand: unknown, findIntent: (id: string) => unknown): unknown {
   const fields = Array.isArray(expand) ? expand : typeof expand === "string" ? [expand] : [];
   const out: Record<string, unknown> = { ...record.session };
   if (fields.includes("line_items")) out.line_items = lineItemList(record.session.id, record.lineItems);

@@ -26,12 +26,7 @@ export function readBody(req: IncomingMessage, limitBytes = 1_000_000): Promise<
   });
 }
 
-export function sendJson(
-  res: ServerResponse,
-  status: number,
-  body: unknown,
-  headers: Record<string, string> = {},
-): void {
+export function sendJson(res: ServerResponse, status: number, body: unknown, headers: Record<string, string> = {}): void {
   const text = JSON.stringify(body, null, 2);
   res.writeHead(status, {
     "Content-Type": "application/json; charset=utf-8",

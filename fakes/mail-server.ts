@@ -45,10 +45,7 @@ export async function startMailFake(options: MailFakeOptions): Promise<MailFake>
     url: `http://${LOOPBACK}:${httpPort}`,
     store,
     async close() {
-      await Promise.all([
-        new Promise<void>((resolve) => smtp.close(() => resolve())),
-        closeHttpServer(http),
-      ]);
+      await Promise.all([new Promise<void>((resolve) => smtp.close(() => resolve())), closeHttpServer(http)]);
     },
   };
 }

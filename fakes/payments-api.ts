@@ -30,7 +30,10 @@ export function listCheckoutSessions(ctx: PaymentsContext, { input }: ApiCall): 
 export async function expireCheckoutSession(ctx: PaymentsContext, { params }: ApiCall): Promise<unknown> {
   const record = sessionOr404(ctx, params.id!);
   if (record.session.status !== "open") {
-    throw new StripeFakeError(400, `Only Checkout Sessions with a status in ["open"] can be expired. This Checkout Session has a status of "${record.session.status}".`);
+    throw new StripeFakeError(
+      400,
+      `Only Checkout Sessions with a status in ["open"] can be expired. This Checkout Session has a status of "${record.session.status}".`,
+    );
   }
   record.session.status = "expired";
   record.session.url = null;
@@ -52,8 +55,7 @@ export function retrievePaymentIntent(ctx: PaymentsContext, { params }: ApiCall)
 export function listEvents(ctx: PaymentsContext, { input }: ApiCall): unknown {
   const type = typeof input.type === "string" ? input.type : undefined;
   // Stripe allows one trailing wildcard: type=checkout.session.*
-  const matches = (eventType: string) =>
-    !type || (type.endsWith(".*") ? eventType.startsWith(type.slice(0, -1)) : eventType === type);
+  const matches = (eventType: string) => !type || (type.endsWith(".*") ? eventType.startsWith(type.slice(0, -1)) : eventType === type);
   const events = ctx.state.events.filter((e) => matches(e.type)).reverse();
   return paginate(events, input, "/v1/events");
 }
@@ -82,10 +84,7 @@ function paginate<T extends { id: string }>(items: T[], input: Params, url: stri
     const start = Math.max(0, end - limit);
     return { object: "list", data: items.slice(start, end), has_more: start > 0, url };
   }
-  const start =
-    typeof input.starting_after === "string"
-      ? cursorIndex(items, input.starting_after, "starting_after") + 1
-      : 0;
+  const start = typeof input.starting_after === "string" ? cursorIndex(items, input.starting_after, "starting_after") + 1 : 0;
   const data = items.slice(start, start + limit);
   return { object: "list", data, has_more: start + limit < items.length, url };
 }

@@ -7,11 +7,7 @@ import { newId, type PaymentsContext } from "./payments-state.ts";
 import { sendStripeError, StripeFakeError } from "./stripe-errors.ts";
 import { parseBody, parseStripeForm, ParamsError, type Params } from "./stripe-params.ts";
 
-export async function handlePaymentsRequest(
-  ctx: PaymentsContext,
-  req: IncomingMessage,
-  res: ServerResponse,
-): Promise<void> {
+export async function handlePaymentsRequest(ctx: PaymentsContext, req: IncomingMessage, res: ServerResponse): Promise<void> {
   const method = req.method ?? "GET";
   const url = new URL(req.url ?? "/", "http://localhost");
   res.setHeader("Request-Id", newId("req_", 14));
@@ -59,18 +55,12 @@ async function readInput(req: IncomingMessage, method: string, url: URL): Promis
 function checkApiKey(authorization: string | undefined): void {
   const key = apiKeyFrom(authorization);
   if (!key) {
-    throw new StripeFakeError(
-      401,
-      "You did not provide an API key. Send it in the Authorization header as 'Bearer sk_test_…'.",
-    );
+    throw new StripeFakeError(401, "You did not provide an API key. Send it in the Authorization header as 'Bearer sk_test_…'.");
   }
   if (!key.startsWith("sk_test_")) {
     // Masked like Stripe does, so logs never carry a whole key.
     const masked = `${key.slice(0, 8)}****${key.slice(-4)}`;
-    throw new StripeFakeError(
-      401,
-      `Invalid API Key provided: ${masked}. The payments fake accepts secret test keys (sk_test_…) only.`,
-    );
+    throw new StripeFakeError(401, `Invalid API Key provided: ${masked}. The payments fake accepts secret test keys (sk_test_…) only.`);
   }
 }
 

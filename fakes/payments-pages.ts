@@ -13,12 +13,7 @@ export function showCheckoutPage(ctx: PaymentsContext, res: ServerResponse, id: 
   sendHtml(res, 200, renderCheckoutPage(record));
 }
 
-export async function submitCheckoutPage(
-  ctx: PaymentsContext,
-  res: ServerResponse,
-  id: string,
-  input: Params,
-): Promise<void> {
+export async function submitCheckoutPage(ctx: PaymentsContext, res: ServerResponse, id: string, input: Params): Promise<void> {
   const record = findSession(ctx.state, id);
   if (!record) return notFound(res, id);
   const values = {

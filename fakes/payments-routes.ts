@@ -17,16 +17,10 @@ import type { PaymentsContext } from "./payments-state.ts";
 import { listDeliveries, payViaTestHook, resetState } from "./payments-test-hooks.ts";
 import type { Params } from "./stripe-params.ts";
 
-export type PageHandler = (
-  ctx: PaymentsContext,
-  res: ServerResponse,
-  params: Record<string, string>,
-  input: Params,
-) => void | Promise<void>;
+export type PageHandler = (ctx: PaymentsContext, res: ServerResponse, params: Record<string, string>, input: Params) => void | Promise<void>;
 
 export type Route =
-  | { method: "GET" | "POST"; path: string; kind: "api"; handle: ApiHandler }
-  | { method: "GET" | "POST"; path: string; kind: "page"; handle: PageHandler };
+  { method: "GET" | "POST"; path: string; kind: "api"; handle: ApiHandler } | { method: "GET" | "POST"; path: string; kind: "page"; handle: PageHandler };
 
 export const ROUTES: Route[] = [
   { method: "POST", path: "/v1/checkout/sessions", kind: "api", handle: createCheckoutSession },

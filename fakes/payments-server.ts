@@ -67,9 +67,7 @@ async function main(): Promise<void> {
     webhookUrl,
     webhookSecret: process.env.STRIPE_WEBHOOK_SECRET || DEFAULT_WEBHOOK_SECRET,
   });
-  console.log(
-    `payments fake: Stripe API at ${fake.url}, webhooks → ${webhookUrl ?? "(none: set WEBHOOK_URL)"}`,
-  );
+  console.log(`payments fake: Stripe API at ${fake.url}, webhooks → ${webhookUrl ?? "(none: set WEBHOOK_URL)"}`);
   stopOnSignals("payments fake", () => fake.close());
 }
 

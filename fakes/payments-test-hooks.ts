@@ -19,9 +19,7 @@ export async function payViaTestHook(ctx: PaymentsContext, { params, input }: Ap
 
 /** GET /_fake/deliveries, newest first; `?event=evt_…` narrows to one event's attempts. */
 export function listDeliveries(ctx: PaymentsContext, { input }: ApiCall): unknown {
-  const data = ctx.state.deliveries
-    .filter((d) => typeof input.event !== "string" || d.eventId === input.event)
-    .reverse();
+  const data = ctx.state.deliveries.filter((d) => typeof input.event !== "string" || d.eventId === input.event).reverse();
   return { object: "list", data };
 }
 

@@ -31,8 +31,7 @@ export function noSuch(kind: string, id: string, param = "id"): StripeFakeError 
 }
 
 export function sendStripeError(res: ServerResponse, error: StripeFakeError): void {
-  const { type = error.status >= 500 ? "api_error" : "invalid_request_error", code, param } =
-    error.details;
+  const { type = error.status >= 500 ? "api_error" : "invalid_request_error", code, param } = error.details;
   sendJson(res, error.status, {
     error: { type, message: error.message, ...(code ? { code } : {}), ...(param ? { param } : {}) },
   });

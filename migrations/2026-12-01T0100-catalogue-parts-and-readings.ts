@@ -135,5 +135,7 @@ export async function down(db: Kysely<any>) {
     await db.schema.dropTable(table).execute();
   }
   await sql`alter table pv_module drop column area_m2, drop column nameplate_density_wm2, drop column measured_density_wm2, drop column verified_ratio,
-    drop column merged_into, drop column verified_pmax_w, drop column verified_reading_count, drop column verified_spread_pct, drop column verified_updated_at`.execute(db);
+    drop column merged_into, drop column verified_pmax_w, drop column verified_reading_count, drop column verified_spread_pct, drop column verified_updated_at`.execute(
+    db,
+  );
 }

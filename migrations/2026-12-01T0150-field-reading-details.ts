@@ -14,7 +14,9 @@ export async function up(db: Kysely<any>) {
     .execute();
   await db.schema.createIndex("field_reading_team_created_idx").on("field_reading").columns(["team_id", "created_at"]).execute();
   await db.schema.createIndex("field_reading_photo_idx").on("field_reading").column("photo_id").execute();
-  await sql`alter table stored_file add constraint stored_file_size_check check (byte_size > 0 and byte_size <= 5242880 and byte_size = octet_length(bytes))`.execute(db);
+  await sql`alter table stored_file add constraint stored_file_size_check check (byte_size > 0 and byte_size <= 5242880 and byte_size = octet_length(bytes))`.execute(
+    db,
+  );
 }
 
 export async function down(db: Kysely<any>) {

@@ -39,8 +39,18 @@ export async function up(db: Kysely<any>) {
     .addColumn("currency", "text", (c) => c.notNull().check(CURRENCY_CHECK("currency")))
     .addColumn("shipping_terms", "text", (c) => c.notNull().defaultTo(""))
     // Defaults that a new offer from this supplier starts from.
-    .addColumn("default_shipping_per_unit", "numeric", (c) => c.notNull().defaultTo(0).check(sql`default_shipping_per_unit >= 0`))
-    .addColumn("default_shipping_per_order", "numeric", (c) => c.notNull().defaultTo(0).check(sql`default_shipping_per_order >= 0`))
+    .addColumn("default_shipping_per_unit", "numeric", (c) =>
+      c
+        .notNull()
+        .defaultTo(0)
+        .check(sql`default_shipping_per_unit >= 0`),
+    )
+    .addColumn("default_shipping_per_order", "numeric", (c) =>
+      c
+        .notNull()
+        .defaultTo(0)
+        .check(sql`default_shipping_per_order >= 0`),
+    )
     .addColumn("default_lead_time_days", "integer", (c) => c.check(sql`default_lead_time_days >= 0`))
     .addColumn("notes", "text", (c) => c.notNull().defaultTo(""))
     .addColumn("created_by", "text", (c) => c.references("user.id").onDelete("set null"))
@@ -61,9 +71,24 @@ export async function up(db: Kysely<any>) {
     .addColumn("sku", "text", (c) => c.notNull().defaultTo(""))
     .addColumn("currency", "text", (c) => c.notNull().check(CURRENCY_CHECK("currency")))
     .addColumn("unit_price", "numeric", (c) => c.notNull().check(sql`unit_price >= 0`))
-    .addColumn("minimum_order", "integer", (c) => c.notNull().defaultTo(1).check(sql`minimum_order >= 1`))
-    .addColumn("shipping_per_unit", "numeric", (c) => c.notNull().defaultTo(0).check(sql`shipping_per_unit >= 0`))
-    .addColumn("shipping_per_order", "numeric", (c) => c.notNull().defaultTo(0).check(sql`shipping_per_order >= 0`))
+    .addColumn("minimum_order", "integer", (c) =>
+      c
+        .notNull()
+        .defaultTo(1)
+        .check(sql`minimum_order >= 1`),
+    )
+    .addColumn("shipping_per_unit", "numeric", (c) =>
+      c
+        .notNull()
+        .defaultTo(0)
+        .check(sql`shipping_per_unit >= 0`),
+    )
+    .addColumn("shipping_per_order", "numeric", (c) =>
+      c
+        .notNull()
+        .defaultTo(0)
+        .check(sql`shipping_per_order >= 0`),
+    )
     .addColumn("lead_time_days", "integer", (c) => c.check(sql`lead_time_days >= 0`))
     .addColumn("stock", "integer", (c) => c.check(sql`stock >= 0`))
     // The last day the price holds; null = no end date given. Expired offers stay, flagged.

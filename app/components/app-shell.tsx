@@ -58,9 +58,7 @@ export function AppShell({ user, devOutbox, children }: { user: ShellUser | null
           <nav aria-label="Main" className="hidden flex-1 gap-1 md:flex">
             <NavLinks user={user} />
           </nav>
-          <div className="ml-auto hidden md:block">
-            {user ? <Account user={user} /> : <SignedOutLinks />}
-          </div>
+          <div className="ml-auto hidden md:block">{user ? <Account user={user} /> : <SignedOutLinks />}</div>
           <details className="relative ml-auto md:hidden">
             <summary className="cursor-pointer list-none rounded-md border border-rule px-3 py-1.5 text-sm">Menu ☰</summary>
             <div className="absolute right-0 z-20 mt-2 flex w-64 flex-col gap-1 rounded-lg border border-rule bg-sheet p-3 shadow-lg">

@@ -2,7 +2,10 @@ import { isRouteErrorResponse, Link } from "react-router";
 
 const TEXT: Record<number, { title: string; body: string }> = {
   401: { title: "Please sign in", body: "This page needs you to be signed in." },
-  403: { title: "Not open to your account", body: "Your account does not have access to this page. If you think it should, ask your team's owner or the service admin." },
+  403: {
+    title: "Not open to your account",
+    body: "Your account does not have access to this page. If you think it should, ask your team's owner or the service admin.",
+  },
   404: { title: "Nothing here", body: "We could not find that page. It may have moved, or the link may be mistyped." },
   503: { title: "Briefly unavailable", body: "Kitwright cannot reach its database right now. Please try again in a moment." },
 };

@@ -1,11 +1,11 @@
 // Form schemas shared by the browser (Conform's client validation) and the server actions.
 import { z } from "zod";
 
-const email = z.email("Enter a valid e-mail address.").max(254).transform((v) => v.toLowerCase());
-const newPassword = z
-  .string({ error: "Choose a password." })
-  .min(10, "Use at least 10 characters.")
-  .max(128, "Use at most 128 characters.");
+const email = z
+  .email("Enter a valid e-mail address.")
+  .max(254)
+  .transform((v) => v.toLowerCase());
+const newPassword = z.string({ error: "Choose a password." }).min(10, "Use at least 10 characters.").max(128, "Use at most 128 characters.");
 
 export const signInSchema = z.object({
   email: z.string({ error: "Enter your e-mail address." }).trim().pipe(email),

@@ -7,7 +7,18 @@ const ALL_MONTHS = [1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12];
 let counter = 0;
 export function newDraft(partial: Partial<ApplianceDraft> = {}): ApplianceDraft {
   counter += 1;
-  return { key: `row-${counter}`, name: "", powerW: "", quantity: "1", hoursPerDay: "", daysPerWeek: "7", circuit: "ac", surgeW: "", months: ALL_MONTHS, ...partial };
+  return {
+    key: `row-${counter}`,
+    name: "",
+    powerW: "",
+    quantity: "1",
+    hoursPerDay: "",
+    daysPerWeek: "7",
+    circuit: "ac",
+    surgeW: "",
+    months: ALL_MONTHS,
+    ...partial,
+  };
 }
 
 export function applianceToDraft(a: Appliance): ApplianceDraft {

@@ -5,10 +5,19 @@ import { applianceIssues } from "~/domain/load/load-sheet";
 const applianceSchema = z
   .object({
     name: z.string({ error: "Give the appliance a name." }).trim().min(1, "Give the appliance a name.").max(80),
-    powerW: z.number({ error: "Power must be a number of watts." }).min(0, "Power must be 0 W or more.").max(100_000, "Power above 100 kW is not an off-grid appliance."),
+    powerW: z
+      .number({ error: "Power must be a number of watts." })
+      .min(0, "Power must be 0 W or more.")
+      .max(100_000, "Power above 100 kW is not an off-grid appliance."),
     quantity: z.number({ error: "How many must be a whole number." }).int("How many must be a whole number.").min(1, "At least 1.").max(1000),
-    hoursPerDay: z.number({ error: "Hours per day must be a number." }).min(0, "Hours per day must be between 0 and 24.").max(24, "Hours per day must be between 0 and 24."),
-    daysPerWeek: z.number({ error: "Days per week must be a number." }).min(0, "Days per week must be between 0 and 7.").max(7, "Days per week must be between 0 and 7."),
+    hoursPerDay: z
+      .number({ error: "Hours per day must be a number." })
+      .min(0, "Hours per day must be between 0 and 24.")
+      .max(24, "Hours per day must be between 0 and 24."),
+    daysPerWeek: z
+      .number({ error: "Days per week must be a number." })
+      .min(0, "Days per week must be between 0 and 7.")
+      .max(7, "Days per week must be between 0 and 7."),
     circuit: z.enum(["ac", "dc"], 'Choose "AC" or "DC".'),
     surgeW: z.number({ error: "Surge must be a number of watts." }).min(0).max(500_000).optional(),
     months: z.array(z.number().int().min(1).max(12)).min(1, "Tick at least one month.").max(12).optional(),

@@ -28,7 +28,9 @@ export const designSchema = z.object({
   stringsInParallel: num("strings in parallel", 1, 100).int("Strings in parallel is a whole number.").optional(),
   batteryStrings: num("battery strings", 1, 20).int("Battery strings is a whole number.").optional(),
   acceptableUnmetDaysPerYear: num("acceptable unmet days", 0, 365).optional(),
-  simulationSeed: num("simulation seed", 0, 2 ** 31 - 1).int().optional(),
+  simulationSeed: num("simulation seed", 0, 2 ** 31 - 1)
+    .int()
+    .optional(),
 });
 
 export const planChoicesSchema = z
@@ -48,7 +50,11 @@ export const planChoicesSchema = z
     const forcedSeries = c.design.modulesInSeries !== undefined;
     const forcedParallel = c.design.stringsInParallel !== undefined;
     if (forcedSeries !== forcedParallel) {
-      ctx.addIssue({ code: "custom", path: ["design", forcedSeries ? "stringsInParallel" : "modulesInSeries"], message: "Give both the modules in series and the strings in parallel, or neither." });
+      ctx.addIssue({
+        code: "custom",
+        path: ["design", forcedSeries ? "stringsInParallel" : "modulesInSeries"],
+        message: "Give both the modules in series and the strings in parallel, or neither.",
+      });
     }
   });
 

@@ -10,7 +10,10 @@ export const READING_KINDS = ["single", "sweep"] as const;
 
 function number(label: string, unit: string, min: number, max: number) {
   const range = `${label} must be from ${min} to ${max} ${unit}.`.replace(/ $/, "");
-  return z.number({ error: (issue) => (issue.input === undefined ? `Enter the ${label.toLowerCase()}.` : `Enter the ${label.toLowerCase()} as a number.`) }).min(min, range).max(max, range);
+  return z
+    .number({ error: (issue) => (issue.input === undefined ? `Enter the ${label.toLowerCase()}.` : `Enter the ${label.toLowerCase()} as a number.`) })
+    .min(min, range)
+    .max(max, range);
 }
 
 export const readingConditionsShape = {
@@ -31,7 +34,11 @@ export const readingConditionsShape = {
   irradianceSource: z.enum(IRRADIANCE_SOURCES, { error: "Say how the irradiance was found." }),
   irradianceWm2: number("Irradiance", "W/m²", 100, 1500).optional(),
   instrument: z.string({ error: "Name the instruments used." }).trim().min(3, "Name the instruments used.").max(200, "Keep it under 200 characters."),
-  method: z.string({ error: "Describe how you measured." }).trim().min(10, "Describe how you measured, in a sentence or two.").max(2000, "Keep it under 2000 characters."),
+  method: z
+    .string({ error: "Describe how you measured." })
+    .trim()
+    .min(10, "Describe how you measured, in a sentence or two.")
+    .max(2000, "Keep it under 2000 characters."),
 };
 
 interface ConditionalFields {

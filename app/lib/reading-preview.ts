@@ -41,7 +41,20 @@ export function previewReading(values: Record<string, string>, csvText: string |
     takenAtLocal: values.takenAtLocal?.trim() || undefined,
     irradianceSource: (["pyranometer", "reference-cell", "clear-sky-estimate"] as const).find((s) => s === values.irradianceSource),
   };
-  for (const name of ["measuredPmaxW", "measuredVoltageV", "measuredCurrentA", "sweepDurationS", "utcOffsetH", "latitudeDeg", "longitudeDeg", "tiltDeg", "azimuthDeg", "airTempC", "moduleTempC", "irradianceWm2"] as const) {
+  for (const name of [
+    "measuredPmaxW",
+    "measuredVoltageV",
+    "measuredCurrentA",
+    "sweepDurationS",
+    "utcOffsetH",
+    "latitudeDeg",
+    "longitudeDeg",
+    "tiltDeg",
+    "azimuthDeg",
+    "airTempC",
+    "moduleTempC",
+    "irradianceWm2",
+  ] as const) {
     conditions[name] = numberOrUndefined(values[name]);
   }
   if (kind === "single" && conditions.measuredPmaxW === undefined && (conditions.measuredVoltageV === undefined || conditions.measuredCurrentA === undefined)) {

@@ -39,12 +39,17 @@ export const siteFormSchema = z
     latitudeDeg: num("latitude"),
     longitudeDeg: num("longitude"),
     elevationM: num("elevation").min(-500, "Elevation must be above −500 m.").max(9000, "Elevation must be below 9000 m."),
-    timeZone: z.string({ error: "Enter the time zone, e.g. Europe/Vienna." }).trim().refine(isTimeZone, "Unknown time zone: use a name like Europe/Vienna or America/Lima."),
+    timeZone: z
+      .string({ error: "Enter the time zone, e.g. Europe/Vienna." })
+      .trim()
+      .refine(isTimeZone, "Unknown time zone: use a name like Europe/Vienna or America/Lima."),
     tiltDeg: num("tilt"),
     azimuthDeg: num("facing"),
     albedo: num("albedo"),
     shadingDeratePct: num("shading derate").min(0, "Shading derate is 0–80 %.").max(80, "Shading derate is 0–80 %."),
-    coldestTempC: num("coldest temperature").min(-60, "The coldest temperature must be at least −60 °C.").max(40, "The coldest temperature must be at most 40 °C."),
+    coldestTempC: num("coldest temperature")
+      .min(-60, "The coldest temperature must be at least −60 °C.")
+      .max(40, "The coldest temperature must be at most 40 °C."),
     irradianceSource: z.enum(["measured", "clearness-preset"], "Choose where the irradiation comes from."),
     clearnessPreset: z.enum(Object.keys(CLEARNESS_PRESETS) as [ClearnessPreset, ...ClearnessPreset[]]).optional(),
     months: z.array(monthSchema).length(12, "Give all 12 months."),
@@ -79,7 +84,9 @@ export const siteFormSchema = z
 export type SiteForm = z.output<typeof siteFormSchema>;
 
 /** The site as the yield engine takes it; a preset fills every month's clearness index. */
-export function toEngineSite(site: Pick<SiteForm, "latitudeDeg" | "longitudeDeg" | "tiltDeg" | "azimuthDeg" | "albedo" | "irradianceSource" | "clearnessPreset" | "months">) {
+export function toEngineSite(
+  site: Pick<SiteForm, "latitudeDeg" | "longitudeDeg" | "tiltDeg" | "azimuthDeg" | "albedo" | "irradianceSource" | "clearnessPreset" | "months">,
+) {
   const kt = site.irradianceSource === "clearness-preset" && site.clearnessPreset ? CLEARNESS_PRESETS[site.clearnessPreset].clearnessIndex : undefined;
   return {
     latitudeDeg: site.latitudeDeg,

@@ -89,7 +89,10 @@ function wholeNumber(text: string, label: string, min: number): { value?: number
 function parseBreaks(text: string, problems: string[]) {
   const breaks: { minQuantity: number; unitPrice: string }[] = [];
   if (!text) return breaks;
-  for (const part of text.split(";").map((p) => p.trim()).filter(Boolean)) {
+  for (const part of text
+    .split(";")
+    .map((p) => p.trim())
+    .filter(Boolean)) {
     const match = /^(\d+)\s*:\s*(.+)$/.exec(part);
     if (!match) {
       problems.push(`Write price breaks as quantity:price pairs separated by semicolons, e.g. 10:56.00; 40:54.20 ("${part}" is not one).`);
@@ -141,7 +144,8 @@ function checkRecord(cells: Record<OfferCsvHeader, string>, row: number, asOf: s
   let validUntil: string | null = null;
   if (cells.valid_until) {
     if (!isIsoDate(cells.valid_until)) add("valid_until", `"${cells.valid_until}" is not a date written YYYY-MM-DD.`);
-    else if (cells.valid_until < asOf) add("valid_until", `The offer expired on ${cells.valid_until} (today is ${asOf}): ask the supplier for a current price, or leave the row out.`);
+    else if (cells.valid_until < asOf)
+      add("valid_until", `The offer expired on ${cells.valid_until} (today is ${asOf}): ask the supplier for a current price, or leave the row out.`);
     else validUntil = cells.valid_until;
   }
   const label = `${cells.supplier || "?"} · ${cells.maker} ${cells.model}`.trim();
@@ -195,7 +199,10 @@ export function checkOfferCsv(text: string, asOf: string): OfferCsvCheck {
   if (check.fileErrors.length) return check;
   check.rowCount = filled.length;
   for (const { cells, row } of filled) {
-    const record = Object.fromEntries(OFFER_CSV_COLUMNS.map((c) => [c.header, (cells[headers.indexOf(c.header)] ?? "").trim()])) as Record<OfferCsvHeader, string>;
+    const record = Object.fromEntries(OFFER_CSV_COLUMNS.map((c) => [c.header, (cells[headers.indexOf(c.header)] ?? "").trim()])) as Record<
+      OfferCsvHeader,
+      string
+    >;
     const { value, problem } = checkRecord(record, row, asOf);
     if (problem) check.problems.push(problem);
     else check.rows.push(value!);

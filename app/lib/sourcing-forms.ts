@@ -31,12 +31,13 @@ export const currencyField = z
   .refine(isCurrencyCode, "Use a three-letter ISO 4217 code, e.g. EUR, GBP, CHF.");
 
 const wholeNumber = (label: string, min: number) =>
-  z.number({ error: (issue) => (issue.input === undefined ? `Enter the ${label}.` : `The ${label} must be a whole number.`) }).int(`The ${label} must be a whole number.`).min(min, `The ${label} must be at least ${min}.`).max(1_000_000, `The ${label} is too large.`);
+  z
+    .number({ error: (issue) => (issue.input === undefined ? `Enter the ${label}.` : `The ${label} must be a whole number.`) })
+    .int(`The ${label} must be a whole number.`)
+    .min(min, `The ${label} must be at least ${min}.`)
+    .max(1_000_000, `The ${label} is too large.`);
 
-export const isoDateField = z
-  .string({ error: "Enter a date as YYYY-MM-DD." })
-  .trim()
-  .refine(isIsoDate, "Enter a real date as YYYY-MM-DD, e.g. 2027-03-31.");
+export const isoDateField = z.string({ error: "Enter a date as YYYY-MM-DD." }).trim().refine(isIsoDate, "Enter a real date as YYYY-MM-DD, e.g. 2027-03-31.");
 
 export const supplierFormSchema = z.object({
   name: z.string({ error: "Name the supplier." }).trim().min(2, "Use at least 2 characters.").max(120),
@@ -77,7 +78,8 @@ export const offerFormSchema = z
     (offer.priceBreaks ?? []).forEach((b, i) => {
       if (!b) return;
       const first = seen.get(b.minQuantity);
-      if (first !== undefined) ctx.addIssue({ code: "custom", path: ["priceBreaks", i, "minQuantity"], message: `Break ${first + 1} already starts at ${b.minQuantity}.` });
+      if (first !== undefined)
+        ctx.addIssue({ code: "custom", path: ["priceBreaks", i, "minQuantity"], message: `Break ${first + 1} already starts at ${b.minQuantity}.` });
       else seen.set(b.minQuantity, i);
     });
   });

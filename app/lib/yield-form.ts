@@ -17,7 +17,17 @@ export interface YieldFormState {
   months: MonthRow[];
   moduleId: string; // "" = custom figures below
   powerBasis: "nameplate" | "verified";
-  custom: { pmaxW: string; vmpV: string; impA: string; vocV: string; iscA: string; gammaPmaxPctPerC: string; betaVocPctPerC: string; alphaIscPctPerC: string; noctC: string };
+  custom: {
+    pmaxW: string;
+    vmpV: string;
+    impA: string;
+    vocV: string;
+    iscA: string;
+    gammaPmaxPctPerC: string;
+    betaVocPctPerC: string;
+    alphaIscPctPerC: string;
+    noctC: string;
+  };
   controllerKind: "mppt" | "pwm";
   batteryVoltageV: string;
   efficiencyPct: string;

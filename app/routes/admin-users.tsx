@@ -65,7 +65,12 @@ export default function AdminUsers({ loaderData, actionData }: Route.ComponentPr
                   <td className="py-2">
                     <Form method="post" className="flex gap-2">
                       <input type="hidden" name="userId" value={u.id} />
-                      <select name="role" defaultValue={u.role ?? "installer"} aria-label={`Role of ${u.name}`} className="rounded border border-rule bg-sheet px-2 py-1">
+                      <select
+                        name="role"
+                        defaultValue={u.role ?? "installer"}
+                        aria-label={`Role of ${u.name}`}
+                        className="rounded border border-rule bg-sheet px-2 py-1"
+                      >
                         {ROLE_LIST.map((r) => (
                           <option key={r} value={r}>
                             {r}
@@ -84,8 +89,16 @@ export default function AdminUsers({ loaderData, actionData }: Route.ComponentPr
         </div>
         <p className="mt-4 flex items-center gap-3 text-sm text-ink-soft">
           {total} account{total === 1 ? "" : "s"} · page {page} of {pages}
-          {page > 1 ? <Link to={`?q=${encodeURIComponent(search)}&page=${page - 1}`} className="underline">← previous</Link> : null}
-          {page < pages ? <Link to={`?q=${encodeURIComponent(search)}&page=${page + 1}`} className="underline">next →</Link> : null}
+          {page > 1 ? (
+            <Link to={`?q=${encodeURIComponent(search)}&page=${page - 1}`} className="underline">
+              ← previous
+            </Link>
+          ) : null}
+          {page < pages ? (
+            <Link to={`?q=${encodeURIComponent(search)}&page=${page + 1}`} className="underline">
+              next →
+            </Link>
+          ) : null}
         </p>
       </Panel>
     </>

@@ -5,5 +5,9 @@ import { requireApiActor } from "~/server/guards.server";
 export async function loader({ request }: Route.LoaderArgs) {
   const actor = await requireApiActor(request);
   if (actor.kind === "api-key") return Response.json({ kind: "api-key", teamId: actor.teamId });
-  return Response.json({ kind: "user", user: { id: actor.user.id, name: actor.user.name, email: actor.user.email, role: actor.user.role }, teamId: actor.teamId });
+  return Response.json({
+    kind: "user",
+    user: { id: actor.user.id, name: actor.user.name, email: actor.user.email, role: actor.user.role },
+    teamId: actor.teamId,
+  });
 }

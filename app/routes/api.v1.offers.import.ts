@@ -12,7 +12,8 @@ import { checkOfferImport, importOffers } from "~/server/sourcing/offer-import.s
 
 async function readCsv(request: Request): Promise<string | Response> {
   const type = request.headers.get("Content-Type") ?? "";
-  if (Number(request.headers.get("Content-Length") ?? 0) > MAX_OFFER_CSV_BYTES + 1024) return jsonError(413, `The body is larger than ${MAX_OFFER_CSV_BYTES / 1024 / 1024} MiB; split the file.`);
+  if (Number(request.headers.get("Content-Length") ?? 0) > MAX_OFFER_CSV_BYTES + 1024)
+    return jsonError(413, `The body is larger than ${MAX_OFFER_CSV_BYTES / 1024 / 1024} MiB; split the file.`);
   const text = await request.text();
   if (text.length > MAX_OFFER_CSV_BYTES + 1024) return jsonError(413, `The body is larger than ${MAX_OFFER_CSV_BYTES / 1024 / 1024} MiB; split the file.`);
   if (type.includes("text/csv") || type.includes("text/plain")) return text;
@@ -25,7 +26,7 @@ async function readCsv(request: Request): Promise<string | Response> {
     }
     return jsonError(400, 'Send { "csv": "…" } with the file\'s text.', { csv: "Required: the CSV text." });
   }
-  return jsonError(415, "Send the CSV as text/csv, or JSON { \"csv\": \"…\" }.");
+  return jsonError(415, 'Send the CSV as text/csv, or JSON { "csv": "…" }.');
 }
 
 function problemFields(report: OfferImportReport) {
@@ -39,7 +40,8 @@ export async function action({ request }: Route.ActionArgs) {
   if (request.method !== "POST") return jsonError(405, "Use POST with the CSV as the body.");
   const { teamId, userId } = await requireApiTeam(request);
   const dryRunText = new URL(request.url).searchParams.get("dryRun") ?? "true";
-  if (dryRunText !== "true" && dryRunText !== "false") return jsonError(400, "The query needs corrections.", { dryRun: "Use true (check only) or false (write)." });
+  if (dryRunText !== "true" && dryRunText !== "false")
+    return jsonError(400, "The query needs corrections.", { dryRun: "Use true (check only) or false (write)." });
   const csv = await readCsv(request);
   if (csv instanceof Response) return csv;
   if (dryRunText === "true") {
@@ -48,7 +50,10 @@ export async function action({ request }: Route.ActionArgs) {
   }
   const outcome = await importOffers(db, teamId, userId, csv);
   if (!outcome.ok) {
-    return Response.json({ error: { message: "Nothing was written: the file has problems (listed by row).", fields: problemFields(outcome.report) }, report: outcome.report }, { status: 400 });
+    return Response.json(
+      { error: { message: "Nothing was written: the file has problems (listed by row).", fields: problemFields(outcome.report) }, report: outcome.report },
+      { status: 400 },
+    );
   }
   return Response.json({ dryRun: false, written: true, report: outcome.report }, { status: 201 });
 }

@@ -8,7 +8,8 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   const { teamId } = await requireApiTeam(request);
   const revisionParam = new URL(request.url).searchParams.get("revision");
   const revision = revisionParam === null ? undefined : Number(revisionParam);
-  if (revision !== undefined && !(Number.isInteger(revision) && revision >= 1)) return jsonError(400, "revision must be a whole number from 1.", { revision: "not a revision number" });
+  if (revision !== undefined && !(Number.isInteger(revision) && revision >= 1))
+    return jsonError(400, "revision must be a whole number from 1.", { revision: "not a revision number" });
   const found = await findPlan(teamId, params.planId, revision);
   if (!found) return jsonError(404, "No such plan (or revision) in your team.");
   const { plan, revision: rev, history } = found;

@@ -9,7 +9,14 @@ export async function loader({ request }: Route.LoaderArgs) {
   const { teamId } = await requireApiTeam(request);
   const plans = await listPlans(teamId);
   return Response.json({
-    items: plans.map((p) => ({ id: p.id, name: p.name, site: p.siteName, revision: p.latest_revision, failingSafetyChecks: p.failing_safety_checks, updatedAt: p.updated_at })),
+    items: plans.map((p) => ({
+      id: p.id,
+      name: p.name,
+      site: p.siteName,
+      revision: p.latest_revision,
+      failingSafetyChecks: p.failing_safety_checks,
+      updatedAt: p.updated_at,
+    })),
     total: plans.length,
   });
 }

@@ -10,7 +10,8 @@ function intParam(url: URL, name: string, fallback: number, min: number, max: nu
   const raw = url.searchParams.get(name);
   if (raw === null) return fallback;
   const value = Number(raw);
-  if (!Number.isInteger(value) || value < min || value > max) throw jsonError(400, `${name} must be a whole number from ${min} to ${max}.`, { [name]: "out of range" });
+  if (!Number.isInteger(value) || value < min || value > max)
+    throw jsonError(400, `${name} must be a whole number from ${min} to ${max}.`, { [name]: "out of range" });
   return value;
 }
 
@@ -21,7 +22,7 @@ export async function loader({ request }: Route.LoaderArgs) {
     viewer = { userId: "", role: "installer", teamId: actor.teamId, seesAll: false, isCurator: false };
   } else {
     const seesAll = actor.user.role === "curator" || actor.user.role === "admin";
-    const teamId = actor.user.role === "installer" ? (await findMembership(actor.user.id))?.teamId ?? null : null;
+    const teamId = actor.user.role === "installer" ? ((await findMembership(actor.user.id))?.teamId ?? null) : null;
     if (!seesAll && !teamId) throw jsonError(403, "Field readings are open to installer teams and curators.");
     viewer = { userId: actor.user.id, role: actor.user.role, teamId, seesAll, isCurator: actor.user.role === "curator" };
   }

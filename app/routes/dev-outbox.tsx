@@ -51,7 +51,12 @@ export default function DevOutbox({ loaderData }: Route.ComponentProps) {
               <dd>{m.receivedAt.replace("T", " ").slice(0, 19)} UTC</dd>
             </dl>
             {m.html ? (
-              <iframe title={`Message: ${m.subject}`} srcDoc={frameDoc(m.html)} sandbox="allow-top-navigation-by-user-activation allow-popups" className="mt-3 h-72 w-full rounded border border-rule bg-white" />
+              <iframe
+                title={`Message: ${m.subject}`}
+                srcDoc={frameDoc(m.html)}
+                sandbox="allow-top-navigation-by-user-activation allow-popups"
+                className="mt-3 h-72 w-full rounded border border-rule bg-white"
+              />
             ) : (
               <pre className="mt-3 whitespace-pre-wrap text-sm">{m.text}</pre>
             )}

@@ -57,9 +57,9 @@ function Landing() {
         <h1 className="text-4xl font-semibold tracking-tight">Kitwright</h1>
       </div>
       <p className="mt-6 text-xl text-ink-soft">
-        Price off-grid solar kits on evidence. A shared module catalogue with field readings normalised to standard test conditions, a planner that sizes the kit
-        for the worst month at the customer's site, a comparison of your suppliers' offers on cost per verified watt, and quotes your customers approve and pay a
-        deposit on.
+        Price off-grid solar kits on evidence. A shared module catalogue with field readings normalised to standard test conditions, a planner that sizes the
+        kit for the worst month at the customer's site, a comparison of your suppliers' offers on cost per verified watt, and quotes your customers approve and
+        pay a deposit on.
       </p>
       <div className="mt-8 flex gap-3">
         <Link to="/sign-up" className="rounded-md bg-copper px-5 py-2.5 font-medium text-sheet hover:bg-copper-dark">

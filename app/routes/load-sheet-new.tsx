@@ -29,7 +29,11 @@ export default function LoadSheetNew({ loaderData, actionData }: Route.Component
         title="New load sheet"
         lead={
           <>
-            What the customer will run at <Link to={`/sites/${loaderData.site.id}`} className="underline">{loaderData.site.name}</Link>, and when.
+            What the customer will run at{" "}
+            <Link to={`/sites/${loaderData.site.id}`} className="underline">
+              {loaderData.site.name}
+            </Link>
+            , and when.
           </>
         }
       />

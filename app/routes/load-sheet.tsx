@@ -19,7 +19,11 @@ async function loadSheet(request: Request, siteId: string, loadSheetId: string) 
 
 export async function loader({ request, params }: Route.LoaderArgs) {
   const { site, sheet } = await loadSheet(request, params.siteId, params.loadSheetId);
-  return { site: { id: site.id, name: site.name }, sheet: { id: sheet.id, name: sheet.name, appliances: sheet.appliances }, inverters: await inverterChoices() };
+  return {
+    site: { id: site.id, name: site.name },
+    sheet: { id: sheet.id, name: sheet.name, appliances: sheet.appliances },
+    inverters: await inverterChoices(),
+  };
 }
 
 export async function action({ request, params }: Route.ActionArgs) {
@@ -43,7 +47,10 @@ export default function LoadSheetPage({ loaderData, actionData }: Route.Componen
         title={sheet.name}
         lead={
           <>
-            Load sheet for <Link to={`/sites/${site.id}`} className="underline">{site.name}</Link>
+            Load sheet for{" "}
+            <Link to={`/sites/${site.id}`} className="underline">
+              {site.name}
+            </Link>
           </>
         }
         actions={

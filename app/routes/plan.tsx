@@ -38,7 +38,14 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     name: plan.name,
     planId: plan.id,
     siteId: plan.site_id,
-    revision: { number: revision.revision, result: revision.result, parts: revision.inputs.parts, overrides: revision.overrides, note: revision.note, createdAt: revision.created_at },
+    revision: {
+      number: revision.revision,
+      result: revision.result,
+      parts: revision.inputs.parts,
+      overrides: revision.overrides,
+      note: revision.note,
+      createdAt: revision.created_at,
+    },
     isLatest,
     sources: current?.ok ? current.sources : null,
     currentProblem: current && !current.ok ? current.message : null,
@@ -54,9 +61,11 @@ export async function action({ request, params }: Route.ActionArgs) {
   const intent = formData.get("intent");
   if (intent === "override") {
     const submission = parseWithZod(formData, { schema: overrideSchema });
-    if (submission.status !== "success") return data({ errors: { [`override.${formData.get("checkId")}`]: submission.error?.reason?.[0] ?? "Give a reason." } }, { status: 400 });
+    if (submission.status !== "success")
+      return data({ errors: { [`override.${formData.get("checkId")}`]: submission.error?.reason?.[0] ?? "Give a reason." } }, { status: 400 });
     const failing = blockingFailures(revision.result.checks).map((c) => c.id);
-    if (!failing.includes(submission.value.checkId)) return data({ errors: { [`override.${submission.value.checkId}`]: "Only a failing safety check needs an override." } }, { status: 400 });
+    if (!failing.includes(submission.value.checkId))
+      return data({ errors: { [`override.${submission.value.checkId}`]: "Only a failing safety check needs an override." } }, { status: 400 });
     const kept = revision.overrides.filter((o) => o.checkId !== submission.value.checkId);
     const entry = { checkId: submission.value.checkId, reason: submission.value.reason, byUserId: user.id, byName: user.name, at: new Date().toISOString() };
     await saveOverrides(team.teamId, plan.id, [...kept, entry]);
@@ -65,7 +74,9 @@ export async function action({ request, params }: Route.ActionArgs) {
   const replanCurrent = intent === "replan-current";
   const outcome = await planFromChoices(team.teamId, replanCurrent ? revision.choices : choicesFromForm(formData));
   if (!outcome.ok) return data({ errors: outcome.fields }, { status: 400 });
-  const typed = String(formData.get("note") ?? "").trim().slice(0, 300);
+  const typed = String(formData.get("note") ?? "")
+    .trim()
+    .slice(0, 300);
   const note = replanCurrent ? "Re-planned with current catalogue and site data." : typed || "Design changed.";
   const number = await addRevision(team.teamId, plan.id, user.id, outcome.choices, outcome.input, outcome.plan, note);
   return redirectWithFlash(`/plans/${plan.id}`, { kind: "success", message: `Saved as revision ${number}.` });
@@ -91,7 +102,10 @@ export default function PlanPage({ loaderData, actionData }: Route.ComponentProp
         lead={
           <>
             Revision {l.revision.number}
-            {l.isLatest ? " (latest)" : ""} · {l.revision.note} · <Link to={`/sites/${l.siteId}`} className="underline">the site</Link>
+            {l.isLatest ? " (latest)" : ""} · {l.revision.note} ·{" "}
+            <Link to={`/sites/${l.siteId}`} className="underline">
+              the site
+            </Link>
           </>
         }
         actions={
@@ -104,10 +118,18 @@ export default function PlanPage({ loaderData, actionData }: Route.ComponentProp
       />
       {!l.isLatest ? (
         <p className="mb-4 rounded-lg border border-rule bg-sheet p-3 text-sm">
-          ℹ You are reading an earlier revision, kept as it was saved. <Link to={`/plans/${l.planId}`} className="underline">Go to the latest</Link>.
+          ℹ You are reading an earlier revision, kept as it was saved.{" "}
+          <Link to={`/plans/${l.planId}`} className="underline">
+            Go to the latest
+          </Link>
+          .
         </p>
       ) : null}
-      {l.currentProblem ? <p className="mb-4 rounded-lg border border-warn bg-warn-wash p-3 text-sm">⚠ This plan cannot be worked out again with today's data: {l.currentProblem}</p> : null}
+      {l.currentProblem ? (
+        <p className="mb-4 rounded-lg border border-warn bg-warn-wash p-3 text-sm">
+          ⚠ This plan cannot be worked out again with today's data: {l.currentProblem}
+        </p>
+      ) : null}
       {l.changes.length ? (
         <div className="mb-4 rounded-lg border border-warn bg-warn-wash p-4 text-sm" role="status">
           <p className="font-semibold">⚠ Since this revision was saved, the data behind it changed:</p>

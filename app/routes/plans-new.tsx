@@ -24,7 +24,13 @@ export async function loader({ request }: Route.LoaderArgs) {
   const options = await editorOptions(team.teamId, site.id);
   const choices = await defaultChoices(site.id, site.name, options.loadSheets[0]?.id ?? "");
   const first = await planFromChoices(team.teamId, choices);
-  return { sites: siteList, siteId: site.id, options, initial: editorStateFrom(choices), initialPlan: first.ok ? { plan: first.plan, sources: first.sources, parts: first.input.parts } : null };
+  return {
+    sites: siteList,
+    siteId: site.id,
+    options,
+    initial: editorStateFrom(choices),
+    initialPlan: first.ok ? { plan: first.plan, sources: first.sources, parts: first.input.parts } : null,
+  };
 }
 
 export async function action({ request }: Route.ActionArgs) {
@@ -43,7 +49,11 @@ export default function PlansNew({ loaderData, actionData }: Route.ComponentProp
       {sites.length === 0 ? (
         <Panel>
           <p>
-            A plan needs a site first. <Link to="/sites/new" className="font-medium text-copper underline">Create a site</Link>, then a load sheet for it.
+            A plan needs a site first.{" "}
+            <Link to="/sites/new" className="font-medium text-copper underline">
+              Create a site
+            </Link>
+            , then a load sheet for it.
           </p>
         </Panel>
       ) : (
@@ -66,7 +76,11 @@ export default function PlansNew({ loaderData, actionData }: Route.ComponentProp
       {options && initial && options.loadSheets.length === 0 ? (
         <Panel>
           <p>
-            This site has no load sheet yet. <Link to={`/sites/${siteId}/loads/new`} className="font-medium text-copper underline">Add one</Link> to plan a kit.
+            This site has no load sheet yet.{" "}
+            <Link to={`/sites/${siteId}/loads/new`} className="font-medium text-copper underline">
+              Add one
+            </Link>{" "}
+            to plan a kit.
           </p>
         </Panel>
       ) : null}

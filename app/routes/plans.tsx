@@ -40,7 +40,11 @@ export default function Plans({ loaderData }: Route.ComponentProps) {
                   </span>
                 </span>
                 <span className={`text-sm ${open ? "text-fail" : "text-pass"}`}>
-                  {open ? `✕ ${open} safety check${open === 1 ? "" : "s"} failing` : overridden ? `⚠ ${overridden} failing safety check${overridden === 1 ? "" : "s"} accepted with a reason` : "✓ safety checks pass"}
+                  {open
+                    ? `✕ ${open} safety check${open === 1 ? "" : "s"} failing`
+                    : overridden
+                      ? `⚠ ${overridden} failing safety check${overridden === 1 ? "" : "s"} accepted with a reason`
+                      : "✓ safety checks pass"}
                 </span>
               </li>
             );

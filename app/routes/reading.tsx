@@ -17,7 +17,9 @@ import { handleDecisionAction } from "~/server/readings/decision-action.server";
 import { approvedValuesByModule, findReadingForViewer, listDecisions } from "~/server/readings/reading-queries.server";
 import { requireReadingViewer } from "~/server/readings/reading-viewer.server";
 
-export const meta: Route.MetaFunction = ({ data }) => [{ title: data ? `Reading of the ${data.reading.maker} ${data.reading.model} · Kitwright` : "Field reading · Kitwright" }];
+export const meta: Route.MetaFunction = ({ data }) => [
+  { title: data ? `Reading of the ${data.reading.maker} ${data.reading.model} · Kitwright` : "Field reading · Kitwright" },
+];
 
 export async function loader({ request, params }: Route.LoaderArgs) {
   const viewer = await requireReadingViewer(request);
@@ -128,7 +130,9 @@ export default function ReadingPage({ loaderData }: Route.ComponentProps) {
               )}{" "}
               The catalogue shows the module at{" "}
               <span className="figures" data-testid="module-verified">
-                {r.verifiedPmaxW === null ? "nameplate only (no approved readings yet)" : `${r.verifiedPmaxW.toFixed(1)} W verified from ${r.verifiedReadingCount} reading${r.verifiedReadingCount === 1 ? "" : "s"}`}
+                {r.verifiedPmaxW === null
+                  ? "nameplate only (no approved readings yet)"
+                  : `${r.verifiedPmaxW.toFixed(1)} W verified from ${r.verifiedReadingCount} reading${r.verifiedReadingCount === 1 ? "" : "s"}`}
               </span>
               .
             </p>
@@ -149,7 +153,11 @@ export default function ReadingPage({ loaderData }: Route.ComponentProps) {
           <Panel title="Evidence photo">
             {r.photoId ? (
               <a href={`/files/${r.photoId}`} target="_blank" rel="noreferrer">
-                <img src={`/files/${r.photoId}`} alt={`Evidence photo for the reading of the ${r.maker} ${r.model}`} className="w-full rounded-md border border-rule" />
+                <img
+                  src={`/files/${r.photoId}`}
+                  alt={`Evidence photo for the reading of the ${r.maker} ${r.model}`}
+                  className="w-full rounded-md border border-rule"
+                />
               </a>
             ) : (
               <p className="text-sm text-ink-faint">No photo with this reading.</p>

@@ -30,7 +30,13 @@ export async function loader({ request }: Route.LoaderArgs) {
   const modules = await listReadableModules();
   const wanted = new URL(request.url).searchParams.get("moduleId");
   return {
-    modules: modules.map((m) => ({ id: m.id, label: `${m.maker} ${m.model} — ${m.pmax_w} W ${m.cell_technology}`, pmaxW: m.pmax_w, gammaPmaxPctPerC: m.gamma_pmax_pct_per_c, noctC: m.noct_c })),
+    modules: modules.map((m) => ({
+      id: m.id,
+      label: `${m.maker} ${m.model} — ${m.pmax_w} W ${m.cell_technology}`,
+      pmaxW: m.pmax_w,
+      gammaPmaxPctPerC: m.gamma_pmax_pct_per_c,
+      noctC: m.noct_c,
+    })),
     moduleId: modules.some((m) => m.id === wanted) ? wanted : null,
   };
 }
@@ -51,7 +57,10 @@ export async function action({ request }: Route.ActionArgs) {
   if (submission.status !== "success") return data({ result: submission.reply() }, { status: 400 });
   const outcome = await submitReading(submission.value, { userId: user.id, teamId: team.teamId });
   if (!outcome.ok) return data({ result: submission.reply({ fieldErrors: outcome.fieldErrors }) }, { status: 400 });
-  return redirectWithFlash(`/readings/${outcome.readingId}`, { kind: "success", message: "Reading sent to the curator. You will get an e-mail when it is decided." });
+  return redirectWithFlash(`/readings/${outcome.readingId}`, {
+    kind: "success",
+    message: "Reading sent to the curator. You will get an e-mail when it is decided.",
+  });
 }
 
 function formValues(form: HTMLFormElement | null): Record<string, string> {
@@ -117,7 +126,12 @@ export default function NewReading({ loaderData, actionData }: Route.ComponentPr
     return csvError ? ({ state: "error", message: csvError } as const) : previewSweep(csv, values.sweepDurationS);
   }, [kind, csv, csvError, values.sweepDurationS]);
   const preview = useMemo(() => previewReading({ ...values, kind }, kind === "sweep" ? csv : null, module), [values, kind, csv, module]);
-  engineProblem.current = sweep.state === "error" ? { field: "sweepFile", message: sweep.message } : preview.state === "error" ? { field: preview.field, message: preview.message } : null;
+  engineProblem.current =
+    sweep.state === "error"
+      ? { field: "sweepFile", message: sweep.message }
+      : preview.state === "error"
+        ? { field: preview.field, message: preview.message }
+        : null;
 
   const onSweepFile = (file: File | null) => {
     setCsv(null);
@@ -136,7 +150,15 @@ export default function NewReading({ loaderData, actionData }: Route.ComponentPr
         title="Submit a field reading"
         lead="Measure a module's maximum power in the sun, tell us the conditions, and the engine normalises it to standard test conditions. A curator reviews it before it counts."
       />
-      <Form method="post" encType="multipart/form-data" ref={formRef} {...getFormProps(form)} onInput={refresh} onChange={refresh} className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_24rem]">
+      <Form
+        method="post"
+        encType="multipart/form-data"
+        ref={formRef}
+        {...getFormProps(form)}
+        onInput={refresh}
+        onChange={refresh}
+        className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_24rem]"
+      >
         <div className="space-y-6">
           <FormErrors errors={form.errors} />
           <Panel title="Module">
@@ -173,7 +195,9 @@ export default function NewReading({ loaderData, actionData }: Route.ComponentPr
                   Method
                 </label>
                 <textarea key={methodKey} {...methodProps} rows={3} className={inputClass} />
-                <p className="mt-1 text-xs text-ink-faint">How the module was mounted and connected, how the sweep ran, anything unusual (dust, wind, shade nearby).</p>
+                <p className="mt-1 text-xs text-ink-faint">
+                  How the module was mounted and connected, how the sweep ran, anything unusual (dust, wind, shade nearby).
+                </p>
                 <FieldError id={fields.method.errorId} errors={fields.method.errors} />
               </div>
               <div>
@@ -187,7 +211,8 @@ export default function NewReading({ loaderData, actionData }: Route.ComponentPr
                   className="block w-full text-sm file:mr-3 file:rounded-md file:border file:border-rule file:bg-paper-deep file:px-3 file:py-1.5"
                 />
                 <p className="mt-1 text-xs text-ink-faint">
-                  The module with its label and the instruments in place. JPEG, PNG or WebP, up to {PHOTO_MAX_BYTES / (1024 * 1024)} MB. Only your team and the curators can open it.
+                  The module with its label and the instruments in place. JPEG, PNG or WebP, up to {PHOTO_MAX_BYTES / (1024 * 1024)} MB. Only your team and the
+                  curators can open it.
                 </p>
                 <FieldError id={fields.photo.errorId} errors={fields.photo.errors} />
               </div>

@@ -19,7 +19,9 @@ export async function action({ request }: Route.ActionArgs) {
   } catch (error) {
     if (!authErrorMessage(error)) throw error;
     return data(
-      { result: submission.reply({ formErrors: ["This reset link has expired or was already used. Ask for a new one."], hideFields: ["password", "confirm"] }) },
+      {
+        result: submission.reply({ formErrors: ["This reset link has expired or was already used. Ask for a new one."], hideFields: ["password", "confirm"] }),
+      },
       { status: 400 },
     );
   }

@@ -68,7 +68,12 @@ export default function Review({ loaderData }: Route.ComponentProps) {
   const actionData = useActionData<typeof action>();
   const navigation = useNavigation();
   const bulkRef = useRef<HTMLFormElement>(null);
-  const bulkErrors = actionData && "result" in actionData ? Object.values(actionData.result.error ?? {}).flat().filter((e): e is string => typeof e === "string") : [];
+  const bulkErrors =
+    actionData && "result" in actionData
+      ? Object.values(actionData.result.error ?? {})
+          .flat()
+          .filter((e): e is string => typeof e === "string")
+      : [];
   const tickClearCases = () => {
     const boxes = document.querySelectorAll<HTMLInputElement>('input[form="bulk-form"][name="readingIds"]');
     boxes.forEach((box) => (box.checked = box.dataset.clear === "true"));
@@ -96,10 +101,22 @@ export default function Review({ loaderData }: Route.ComponentProps) {
             </label>
             <input id="bulk-reason" name="reason" className={inputClass} />
             <div className="flex flex-wrap gap-2">
-              <button type="submit" name="decision" value="approved" disabled={navigation.state !== "idle"} className="rounded-md bg-copper px-3 py-1.5 text-sm font-medium text-sheet hover:bg-copper-dark disabled:opacity-60">
+              <button
+                type="submit"
+                name="decision"
+                value="approved"
+                disabled={navigation.state !== "idle"}
+                className="rounded-md bg-copper px-3 py-1.5 text-sm font-medium text-sheet hover:bg-copper-dark disabled:opacity-60"
+              >
                 <span aria-hidden="true">✓ </span>Approve ticked
               </button>
-              <button type="submit" name="decision" value="rejected" disabled={navigation.state !== "idle"} className="rounded-md border border-fail px-3 py-1.5 text-sm font-medium text-fail hover:bg-fail-wash disabled:opacity-60">
+              <button
+                type="submit"
+                name="decision"
+                value="rejected"
+                disabled={navigation.state !== "idle"}
+                className="rounded-md border border-fail px-3 py-1.5 text-sm font-medium text-fail hover:bg-fail-wash disabled:opacity-60"
+              >
                 <span aria-hidden="true">✕ </span>Reject ticked
               </button>
             </div>

@@ -54,7 +54,9 @@ export default function SignUp({ actionData }: Route.ComponentProps) {
   return (
     <div className="mx-auto max-w-md">
       <Panel title="Create an installer account">
-        <p className="mb-4 text-sm text-ink-soft">You will name your team next, then invite colleagues. Joining a team by invitation? Use the e-mail address the invitation was sent to.</p>
+        <p className="mb-4 text-sm text-ink-soft">
+          You will name your team next, then invite colleagues. Joining a team by invitation? Use the e-mail address the invitation was sent to.
+        </p>
         <Form method="post" {...getFormProps(form)} className="space-y-4">
           <input type="hidden" name="redirectTo" value={redirectTo} />
           <FormErrors errors={form.errors} />

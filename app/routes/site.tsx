@@ -23,7 +23,11 @@ async function loadSite(request: Request, siteId: string) {
 export async function loader({ request, params }: Route.LoaderArgs) {
   const { team, site } = await loadSite(request, params.siteId);
   const sheets = await listLoadSheets(team.teamId, site.id);
-  return { site: { id: site.id, name: site.name }, form: siteToForm(site), sheets: sheets.map((s) => ({ id: s.id, name: s.name, applianceCount: s.appliances.length })) };
+  return {
+    site: { id: site.id, name: site.name },
+    form: siteToForm(site),
+    sheets: sheets.map((s) => ({ id: s.id, name: s.name, applianceCount: s.appliances.length })),
+  };
 }
 
 export async function action({ request, params }: Route.ActionArgs) {

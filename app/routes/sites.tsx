@@ -37,7 +37,9 @@ export default function Sites({ loaderData }: Route.ComponentProps) {
               </span>
               <span className="figures text-sm text-ink-faint">
                 {s.latitude_deg.toFixed(2)}°, {s.longitude_deg.toFixed(2)}° · tilt {s.tilt_deg}° facing {s.azimuth_deg}° ·{" "}
-                {s.irradiance_source === "measured" ? "measured irradiation" : `assumed sky: ${CLEARNESS_PRESETS[s.clearness_preset as ClearnessPreset]?.label ?? s.clearness_preset}`}
+                {s.irradiance_source === "measured"
+                  ? "measured irradiation"
+                  : `assumed sky: ${CLEARNESS_PRESETS[s.clearness_preset as ClearnessPreset]?.label ?? s.clearness_preset}`}
               </span>
             </li>
           ))}

@@ -8,7 +8,14 @@ import { PageHeader, Panel } from "~/components/page-header";
 import { CompareTable, type SortChoice } from "~/components/sourcing/compare-table";
 import { moduleCompareColumns, MODULE_NUMERIC } from "~/components/sourcing/module-compare-columns";
 import { NeedForm } from "~/components/sourcing/need-form";
-import { BATTERY_NUMERIC, batteryCompareColumns, CONTROLLER_NUMERIC, controllerCompareColumns, INVERTER_NUMERIC, inverterCompareColumns } from "~/components/sourcing/part-compare-columns";
+import {
+  BATTERY_NUMERIC,
+  batteryCompareColumns,
+  CONTROLLER_NUMERIC,
+  controllerCompareColumns,
+  INVERTER_NUMERIC,
+  inverterCompareColumns,
+} from "~/components/sourcing/part-compare-columns";
 import { SourcingTabs } from "~/components/sourcing/sourcing-tabs";
 import { requiredArrayPowerW } from "~/domain/sourcing/array-need";
 import type { ModuleComparisonRow } from "~/domain/sourcing/module-rows";
@@ -21,7 +28,9 @@ import { compareOffers } from "~/server/sourcing/comparison.server";
 
 const TITLES: Record<OfferPartKind, string> = { modules: "Modules", batteries: "Batteries", controllers: "Charge controllers", inverters: "Inverters" };
 
-export const meta: Route.MetaFunction = ({ params }) => [{ title: `Compare ${isOfferPartKind(params.kind) ? TITLES[params.kind].toLowerCase() : "offers"} · Sourcing · Kitwright` }];
+export const meta: Route.MetaFunction = ({ params }) => [
+  { title: `Compare ${isOfferPartKind(params.kind) ? TITLES[params.kind].toLowerCase() : "offers"} · Sourcing · Kitwright` },
+];
 
 export async function loader({ request, params }: Route.LoaderArgs) {
   const { team } = await requireTeamMember(request);
@@ -52,13 +61,23 @@ function NeedSummary({ kind, need }: { kind: OfferPartKind; need: Route.Componen
     return (
       <>
         {(need.arrayEnergyWhPerDay / 1000).toLocaleString("en-GB")} kWh a day at {need.sunHoursPerDay} sun hours with {need.systemLossesPct} % losses needs{" "}
-        <strong className="figures">{Math.round(arrayW).toLocaleString("en-GB")} W</strong> of array at STC; each module is counted on its verified power where readings exist, else on its nameplate (a peak-sun-hours estimate — common practice, no source).
+        <strong className="figures">{Math.round(arrayW).toLocaleString("en-GB")} W</strong> of array at STC; each module is counted on its verified power where
+        readings exist, else on its nameplate (a peak-sun-hours estimate — common practice, no source).
       </>
     );
   }
   if (kind === "batteries") return <>{need.quantity} batteries of each offer.</>;
-  if (kind === "controllers") return <>{need.quantity} controller(s), for a {need.arrayPowerW.toLocaleString("en-GB")} W array on a {need.batteryVoltageV} V bank.</>;
-  return <>{need.quantity} inverter(s), for a {need.peakAcLoadW.toLocaleString("en-GB")} W peak AC load on a {need.batteryVoltageV} V bank.</>;
+  if (kind === "controllers")
+    return (
+      <>
+        {need.quantity} controller(s), for a {need.arrayPowerW.toLocaleString("en-GB")} W array on a {need.batteryVoltageV} V bank.
+      </>
+    );
+  return (
+    <>
+      {need.quantity} inverter(s), for a {need.peakAcLoadW.toLocaleString("en-GB")} W peak AC load on a {need.batteryVoltageV} V bank.
+    </>
+  );
 }
 
 export default function Compare({ loaderData }: Route.ComponentProps) {
@@ -88,7 +107,12 @@ export default function Compare({ loaderData }: Route.ComponentProps) {
       <SourcingTabs />
       <nav aria-label="Kind of part" className="mb-4 flex flex-wrap gap-1 text-sm">
         {OFFER_PART_KINDS.map((k) => (
-          <Link key={k} to={`/sourcing/compare/${k}${keep ? `?${keep}` : ""}`} aria-current={k === kind ? "page" : undefined} className={`rounded px-3 py-1.5 ${k === kind ? "bg-copper-wash font-medium" : "text-ink-soft hover:text-ink"}`}>
+          <Link
+            key={k}
+            to={`/sourcing/compare/${k}${keep ? `?${keep}` : ""}`}
+            aria-current={k === kind ? "page" : undefined}
+            className={`rounded px-3 py-1.5 ${k === kind ? "bg-copper-wash font-medium" : "text-ink-soft hover:text-ink"}`}
+          >
             {TITLES[k]}
           </Link>
         ))}
@@ -111,13 +135,41 @@ export default function Compare({ loaderData }: Route.ComponentProps) {
         ) : null}
         <Panel>
           {kind === "modules" ? (
-            <CompareTable columns={moduleCompareColumns()} data={rows as ModuleComparisonRow[]} sort={sort} onSort={onSort} caption={caption} numericColumns={MODULE_NUMERIC} />
+            <CompareTable
+              columns={moduleCompareColumns()}
+              data={rows as ModuleComparisonRow[]}
+              sort={sort}
+              onSort={onSort}
+              caption={caption}
+              numericColumns={MODULE_NUMERIC}
+            />
           ) : kind === "batteries" ? (
-            <CompareTable columns={batteryCompareColumns()} data={rows as BatteryComparisonRow[]} sort={sort} onSort={onSort} caption={caption} numericColumns={BATTERY_NUMERIC} />
+            <CompareTable
+              columns={batteryCompareColumns()}
+              data={rows as BatteryComparisonRow[]}
+              sort={sort}
+              onSort={onSort}
+              caption={caption}
+              numericColumns={BATTERY_NUMERIC}
+            />
           ) : kind === "controllers" ? (
-            <CompareTable columns={controllerCompareColumns(comparison.need.batteryVoltageV, comparison.need.arrayPowerW)} data={rows as ControllerComparisonRow[]} sort={sort} onSort={onSort} caption={caption} numericColumns={CONTROLLER_NUMERIC} />
+            <CompareTable
+              columns={controllerCompareColumns(comparison.need.batteryVoltageV, comparison.need.arrayPowerW)}
+              data={rows as ControllerComparisonRow[]}
+              sort={sort}
+              onSort={onSort}
+              caption={caption}
+              numericColumns={CONTROLLER_NUMERIC}
+            />
           ) : (
-            <CompareTable columns={inverterCompareColumns(comparison.need.batteryVoltageV, comparison.need.peakAcLoadW)} data={rows as InverterComparisonRow[]} sort={sort} onSort={onSort} caption={caption} numericColumns={INVERTER_NUMERIC} />
+            <CompareTable
+              columns={inverterCompareColumns(comparison.need.batteryVoltageV, comparison.need.peakAcLoadW)}
+              data={rows as InverterComparisonRow[]}
+              sort={sort}
+              onSort={onSort}
+              caption={caption}
+              numericColumns={INVERTER_NUMERIC}
+            />
           )}
           <Footnotes kind={kind} />
         </Panel>
@@ -131,13 +183,29 @@ function Footnotes({ kind }: { kind: OfferPartKind }) {
     <ul className="mt-4 space-y-1 text-xs text-ink-faint">
       {kind === "modules" ? (
         <>
-          <li>Price per watt = unit price at the quantity bought ÷ the module's power. Verified power is the median of the catalogue's approved field readings, normalised to STC; "no readings" means nameplate only.</li>
+          <li>
+            Price per watt = unit price at the quantity bought ÷ the module's power. Verified power is the median of the catalogue's approved field readings,
+            normalised to STC; "no readings" means nameplate only.
+          </li>
           <li>Measured W/m² = verified power ÷ the module's outline area; area needed = modules × outline area.</li>
         </>
       ) : null}
-      {kind === "batteries" ? <li>Usable kWh = nominal V × capacity Ah × usable depth of discharge. Price per cycled kWh = unit price ÷ (usable kWh × rated cycles): purchase price only, before charging losses and ageing.</li> : null}
-      {kind === "controllers" ? <li>Charge current ≈ array power ÷ bank voltage (cautious: conversion losses ignored). The string's cold-morning Voc against the controller's limit is checked in the kit plan.</li> : null}
-      <li>Landed = goods at the price break for the quantity bought (raised to the minimum order) + shipping per unit and per order, each rounded once; converted totals are rounded once more. Expired offers are left out.</li>
+      {kind === "batteries" ? (
+        <li>
+          Usable kWh = nominal V × capacity Ah × usable depth of discharge. Price per cycled kWh = unit price ÷ (usable kWh × rated cycles): purchase price
+          only, before charging losses and ageing.
+        </li>
+      ) : null}
+      {kind === "controllers" ? (
+        <li>
+          Charge current ≈ array power ÷ bank voltage (cautious: conversion losses ignored). The string's cold-morning Voc against the controller's limit is
+          checked in the kit plan.
+        </li>
+      ) : null}
+      <li>
+        Landed = goods at the price break for the quantity bought (raised to the minimum order) + shipping per unit and per order, each rounded once; converted
+        totals are rounded once more. Expired offers are left out.
+      </li>
     </ul>
   );
 }

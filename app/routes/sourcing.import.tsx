@@ -28,7 +28,8 @@ function failure(error: string, status = 400) {
 
 export async function action({ request }: Route.ActionArgs) {
   const { user, team } = await requireTeamMember(request);
-  if (Number(request.headers.get("Content-Length") ?? 0) > MAX_OFFER_CSV_BYTES + 64 * 1024) return failure(`The file is larger than ${MAX_OFFER_CSV_BYTES / 1024 / 1024} MiB; split it.`, 413);
+  if (Number(request.headers.get("Content-Length") ?? 0) > MAX_OFFER_CSV_BYTES + 64 * 1024)
+    return failure(`The file is larger than ${MAX_OFFER_CSV_BYTES / 1024 / 1024} MiB; split it.`, 413);
   const form = await request.formData();
   const intent = form.get("intent");
   if (intent !== "check" && intent !== "import") return failure("Unknown step: choose Check or Import.");
@@ -55,7 +56,10 @@ export default function SourcingImport({ actionData }: Route.ComponentProps) {
   const busy = navigation.state === "submitting";
   return (
     <>
-      <PageHeader title="Import offers from CSV" lead="Check the file first: every row's problems are listed and nothing is written. The import then writes all rows together, or none if any row has a problem." />
+      <PageHeader
+        title="Import offers from CSV"
+        lead="Check the file first: every row's problems are listed and nothing is written. The import then writes all rows together, or none if any row has a problem."
+      />
       <SourcingTabs />
       <div className="grid gap-6 lg:grid-cols-[3fr_2fr]">
         <div className="space-y-6">
@@ -83,8 +87,13 @@ export default function SourcingImport({ actionData }: Route.ComponentProps) {
         </div>
         <Panel title="Columns">
           <p className="mb-2 text-sm text-ink-soft">
-            The first row names the columns (any order). Parts are matched to the catalogue by kind, maker and model. A row for a supplier and part you already have replaces that offer's terms. Rows whose valid-until day has passed are refused.{" "}
-            <a href={`data:text/csv;charset=utf-8,${encodeURIComponent(template())}`} download="kitwright-offers-template.csv" className="text-copper underline">
+            The first row names the columns (any order). Parts are matched to the catalogue by kind, maker and model. A row for a supplier and part you already
+            have replaces that offer's terms. Rows whose valid-until day has passed are refused.{" "}
+            <a
+              href={`data:text/csv;charset=utf-8,${encodeURIComponent(template())}`}
+              download="kitwright-offers-template.csv"
+              className="text-copper underline"
+            >
               Download an empty template
             </a>
             , or export your offers from the overview and edit them.

@@ -108,7 +108,8 @@ export default function OfferPage({ loaderData, actionData }: Route.ComponentPro
       <div className="space-y-6">
         {offer.expired ? (
           <p className="rounded-md bg-warn-wash px-3 py-2 text-sm text-warn" role="note">
-            <span aria-hidden="true">⚠</span> This price expired on {offer.validUntil}. It is kept for your records and left out of comparisons; ask the supplier for a new price and change the date.
+            <span aria-hidden="true">⚠</span> This price expired on {offer.validUntil}. It is kept for your records and left out of comparisons; ask the
+            supplier for a new price and change the date.
           </p>
         ) : null}
         <Panel title="What it costs, landed">

@@ -35,7 +35,10 @@ export async function action({ request }: Route.ActionArgs) {
   }
   if (value.intent === "add-rate") {
     await saveRate(db, team.teamId, user.id, value);
-    return redirectWithFlash("/sourcing/rates", { kind: "success", message: `Rate saved: 1 ${value.fromCurrency} = ${value.rate} ${value.toCurrency} on ${value.asOf}.` });
+    return redirectWithFlash("/sourcing/rates", {
+      kind: "success",
+      message: `Rate saved: 1 ${value.fromCurrency} = ${value.rate} ${value.toCurrency} on ${value.asOf}.`,
+    });
   }
   if (!(await deleteRate(db, team.teamId, value.rateId))) throw new Response("No such rate in your team.", { status: 404 });
   return redirectWithFlash("/sourcing/rates", { kind: "info", message: "Rate deleted." });
@@ -43,7 +46,13 @@ export async function action({ request }: Route.ActionArgs) {
 
 function CurrencyForm({ current, lastResult }: { current: string; lastResult?: SubmissionResult<string[]> }) {
   const navigation = useNavigation();
-  const [form, fields] = useForm({ id: "currency", lastResult, defaultValue: { quotingCurrency: current }, constraint: getZodConstraint(ratesActionSchema), shouldValidate: "onBlur" });
+  const [form, fields] = useForm({
+    id: "currency",
+    lastResult,
+    defaultValue: { quotingCurrency: current },
+    constraint: getZodConstraint(ratesActionSchema),
+    shouldValidate: "onBlur",
+  });
   return (
     <Form method="post" {...getFormProps(form)} className="flex flex-wrap items-end gap-3">
       <input type="hidden" name="intent" value="currency" />
@@ -84,7 +93,10 @@ export default function Rates({ loaderData, actionData }: Route.ComponentProps) 
   const { quoting, rates, today } = loaderData;
   return (
     <>
-      <PageHeader title="Currency and rates" lead="Comparisons and landed costs are shown in your quoting currency. You enter the rates yourself, with the day you took them; each converted figure names the rate it used." />
+      <PageHeader
+        title="Currency and rates"
+        lead="Comparisons and landed costs are shown in your quoting currency. You enter the rates yourself, with the day you took them; each converted figure names the rate it used."
+      />
       <SourcingTabs />
       <div className="grid gap-6 lg:grid-cols-2">
         <Panel title="Quoting currency">
@@ -96,7 +108,9 @@ export default function Rates({ loaderData, actionData }: Route.ComponentProps) 
         </Panel>
         <Panel title="Add a rate">
           <RateForm quoting={quoting.currency} today={today} lastResult={actionData?.intent === "add-rate" ? actionData.result : undefined} />
-          <p className="mt-2 text-xs text-ink-faint">A rate entered one way also converts the other way (1 ÷ rate). A new rate for the same pair and day replaces the old one.</p>
+          <p className="mt-2 text-xs text-ink-faint">
+            A rate entered one way also converts the other way (1 ÷ rate). A new rate for the same pair and day replaces the old one.
+          </p>
         </Panel>
       </div>
       <div className="mt-6">

@@ -23,13 +23,24 @@ export async function loader({ request }: Route.LoaderArgs) {
   const kindParam = new URL(request.url).searchParams.get("kind");
   const kind = isOfferPartKind(kindParam) ? kindParam : null;
   const asOf = todayIso();
-  const [suppliers, offers, quoting] = await Promise.all([listSuppliers(db, team.teamId, asOf), listOffers(db, team.teamId, { partKind: kind ?? undefined, asOf }), getQuotingCurrency(db, team.teamId)]);
+  const [suppliers, offers, quoting] = await Promise.all([
+    listSuppliers(db, team.teamId, asOf),
+    listOffers(db, team.teamId, { partKind: kind ?? undefined, asOf }),
+    getQuotingCurrency(db, team.teamId),
+  ]);
   return {
     teamName: team.teamName,
     kind,
     asOf,
     quoting,
-    suppliers: suppliers.map((s) => ({ id: s.id, name: s.name, currency: s.currency, contact: s.contact, offerCount: Number(s.offerCount), expiredCount: Number(s.expiredCount) })),
+    suppliers: suppliers.map((s) => ({
+      id: s.id,
+      name: s.name,
+      currency: s.currency,
+      contact: s.contact,
+      offerCount: Number(s.offerCount),
+      expiredCount: Number(s.expiredCount),
+    })),
     offers: offers.map(offerJson),
   };
 }
@@ -82,11 +93,20 @@ export default function Sourcing({ loaderData }: Route.ComponentProps) {
         </Panel>
         <Panel title="Offers">
           <nav aria-label="Kind of part" className="mb-3 flex flex-wrap items-center gap-1 text-sm">
-            <Link to="/sourcing" aria-current={kind === null ? "page" : undefined} className={`rounded px-2 py-1 ${kind === null ? "bg-copper-wash font-medium" : "text-ink-soft"}`}>
+            <Link
+              to="/sourcing"
+              aria-current={kind === null ? "page" : undefined}
+              className={`rounded px-2 py-1 ${kind === null ? "bg-copper-wash font-medium" : "text-ink-soft"}`}
+            >
               All
             </Link>
             {OFFER_PART_KINDS.map((k) => (
-              <Link key={k} to={`/sourcing?kind=${k}`} aria-current={kind === k ? "page" : undefined} className={`rounded px-2 py-1 ${kind === k ? "bg-copper-wash font-medium" : "text-ink-soft"}`}>
+              <Link
+                key={k}
+                to={`/sourcing?kind=${k}`}
+                aria-current={kind === k ? "page" : undefined}
+                className={`rounded px-2 py-1 ${kind === k ? "bg-copper-wash font-medium" : "text-ink-soft"}`}
+              >
                 {KIND_TITLES[k]}
               </Link>
             ))}
@@ -99,7 +119,8 @@ export default function Sourcing({ loaderData }: Route.ComponentProps) {
           {expired ? (
             <p className="mb-3 flex gap-1.5 rounded-md bg-warn-wash px-3 py-2 text-sm text-warn" role="note">
               <span aria-hidden="true">⚠</span>
-              {expired} offer{expired === 1 ? " has" : "s have"} expired (valid-until day before {loaderData.asOf}). They stay here for your records and are left out of the comparisons.
+              {expired} offer{expired === 1 ? " has" : "s have"} expired (valid-until day before {loaderData.asOf}). They stay here for your records and are
+              left out of the comparisons.
             </p>
           ) : null}
           <OfferList offers={offers} />

@@ -39,8 +39,8 @@ export default function TeamNew({ actionData }: Route.ComponentProps) {
     <div className="mx-auto max-w-md">
       <Panel title="Name your team">
         <p className="mb-4 text-sm text-ink-soft">
-          Your team's sites, kit plans, offers and quotes are shared with its members and hidden from everyone else. Customers see your team's name on
-          their quotes.
+          Your team's sites, kit plans, offers and quotes are shared with its members and hidden from everyone else. Customers see your team's name on their
+          quotes.
         </p>
         <Form method="post" {...getFormProps(form)} className="space-y-4">
           <TextField field={fields.name} label="Team name" autoComplete="organization" />

@@ -37,7 +37,8 @@ export async function action({ request }: Route.ActionArgs) {
     const members = await listMembers(team.teamId);
     const target = members.find((m) => m.memberId === body.memberId);
     if (!target) throw new Response("No such member in your team.", { status: 404 });
-    if (target.userId === user.id) return data({ result: submission.reply({ formErrors: ["You own this team and cannot remove yourself."] }) }, { status: 400 });
+    if (target.userId === user.id)
+      return data({ result: submission.reply({ formErrors: ["You own this team and cannot remove yourself."] }) }, { status: 400 });
     await auth.api.removeMember({ body: { memberIdOrEmail: body.memberId, organizationId: team.teamId }, headers: request.headers });
     return redirectWithFlash("/team", { kind: "info", message: `${target.name} is no longer in the team.` });
   } catch (error) {

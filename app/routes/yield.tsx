@@ -61,7 +61,8 @@ export default function YieldPage({ loaderData }: Route.ComponentProps) {
   const errors = error?.fields ?? {};
   const pending = fetcher.state !== "idle";
   const update = (patch: Partial<YieldFormState>) => setState((s) => ({ ...s, ...patch }));
-  const updateMonth = (index: number, patch: Partial<MonthRow>) => setState((s) => ({ ...s, months: s.months.map((m, i) => (i === index ? { ...m, ...patch } : m)) }));
+  const updateMonth = (index: number, patch: Partial<MonthRow>) =>
+    setState((s) => ({ ...s, months: s.months.map((m, i) => (i === index ? { ...m, ...patch } : m)) }));
 
   return (
     <>

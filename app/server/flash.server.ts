@@ -5,7 +5,6 @@ import { env } from "./env.server";
 import type { Flash } from "~/lib/flash";
 export type { Flash };
 
-
 const storage = createCookieSessionStorage<{}, { flash: Flash }>({
   cookie: {
     name: "kw_flash",

@@ -68,9 +68,7 @@ export async function requireTeamOwner(request: Request) {
 }
 
 /** The actor behind an /api/v1 request: a team API key or a signed-in user. Anonymous → 401 JSON. */
-export type ApiActor =
-  | { kind: "api-key"; teamId: string; keyId: string }
-  | { kind: "user"; user: SignedInUser; teamId: string | null };
+export type ApiActor = { kind: "api-key"; teamId: string; keyId: string } | { kind: "user"; user: SignedInUser; teamId: string | null };
 
 export async function requireApiActor(request: Request): Promise<ApiActor> {
   const authorization = request.headers.get("Authorization");
@@ -88,6 +86,10 @@ export async function requireApiActor(request: Request): Promise<ApiActor> {
 /** The team an API request acts for; customers, curators and admins have none → 403 JSON. */
 export async function requireApiTeam(request: Request) {
   const actor = await requireApiActor(request);
-  if (!actor.teamId) throw Response.json({ error: { message: "This endpoint serves installer teams: sign in as an installer with a team, or use a team API key." } }, { status: 403 });
+  if (!actor.teamId)
+    throw Response.json(
+      { error: { message: "This endpoint serves installer teams: sign in as an installer with a team, or use a team API key." } },
+      { status: 403 },
+    );
   return { actor, teamId: actor.teamId, userId: actor.kind === "user" ? actor.user.id : null };
 }

@@ -6,9 +6,7 @@ import type { ModuleSpec, YieldResult } from "~/domain/solar/yield-types";
 import { db } from "./db.server";
 import { isUuid } from "./modules.server";
 
-export type YieldOutcome =
-  | { ok: true; result: YieldResult }
-  | { ok: false; status: 400 | 404; error: { message: string; fields?: Record<string, string> } };
+export type YieldOutcome = { ok: true; result: YieldResult } | { ok: false; status: 400 | 404; error: { message: string; fields?: Record<string, string> } };
 
 export async function computeYield(body: unknown): Promise<YieldOutcome> {
   const parsed = yieldRequestSchema.safeParse(body);
@@ -22,7 +20,12 @@ export async function computeYield(body: unknown): Promise<YieldOutcome> {
   const extraAssumptions: string[] = [];
   if ("moduleId" in request.module) {
     const row = await findModuleFigures(request.module.moduleId);
-    if (!row) return { ok: false, status: 400, error: { message: "No module with that id in the catalogue.", fields: { "module.moduleId": "No module with that id in the catalogue." } } };
+    if (!row)
+      return {
+        ok: false,
+        status: 400,
+        error: { message: "No module with that id in the catalogue.", fields: { "module.moduleId": "No module with that id in the catalogue." } },
+      };
     // The same rule as the kit planner: verified power scales the module's currents; without
     // approved readings the nameplate is used and the answer says so.
     const chosen = moduleForEnergy(
@@ -57,7 +60,22 @@ async function findModuleFigures(id: string) {
   if (!isUuid(id)) return undefined;
   return db
     .selectFrom("pv_module")
-    .select(["maker", "model", "pmax_w", "vmp_v", "imp_a", "voc_v", "isc_a", "gamma_pmax_pct_per_c", "beta_voc_pct_per_c", "alpha_isc_pct_per_c", "noct_c", "cells_in_series", "verified_pmax_w", "verified_reading_count"])
+    .select([
+      "maker",
+      "model",
+      "pmax_w",
+      "vmp_v",
+      "imp_a",
+      "voc_v",
+      "isc_a",
+      "gamma_pmax_pct_per_c",
+      "beta_voc_pct_per_c",
+      "alpha_isc_pct_per_c",
+      "noct_c",
+      "cells_in_series",
+      "verified_pmax_w",
+      "verified_reading_count",
+    ])
     .where("id", "=", id)
     .executeTakeFirst();
 }

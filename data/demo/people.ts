@@ -19,9 +19,27 @@ export const DEMO_TEAMS = [
 ];
 
 export const DEMO_USERS: DemoUser[] = [
-  { name: "Maren Quill", email: "maren@tallowmere.example", role: "installer", team: { slug: "tallowmere-power-works", membership: "owner" }, note: "owner of Tallowmere Power Works" },
-  { name: "Tobin Arkwell", email: "tobin@tallowmere.example", role: "installer", team: { slug: "tallowmere-power-works", membership: "member" }, note: "installer at Tallowmere Power Works" },
-  { name: "Sefa Lindqvist-Orr", email: "sefa@brindlecombe.example", role: "installer", team: { slug: "brindlecombe-electric", membership: "owner" }, note: "owner of another team (for isolation)" },
+  {
+    name: "Maren Quill",
+    email: "maren@tallowmere.example",
+    role: "installer",
+    team: { slug: "tallowmere-power-works", membership: "owner" },
+    note: "owner of Tallowmere Power Works",
+  },
+  {
+    name: "Tobin Arkwell",
+    email: "tobin@tallowmere.example",
+    role: "installer",
+    team: { slug: "tallowmere-power-works", membership: "member" },
+    note: "installer at Tallowmere Power Works",
+  },
+  {
+    name: "Sefa Lindqvist-Orr",
+    email: "sefa@brindlecombe.example",
+    role: "installer",
+    team: { slug: "brindlecombe-electric", membership: "owner" },
+    note: "owner of another team (for isolation)",
+  },
   { name: "Ilse Varrow", email: "curator@kitwright.example", role: "curator", note: "catalogue curator" },
   { name: "Dov Pennick", email: "admin@kitwright.example", role: "admin", note: "service admin" },
   { name: "Aurel Stroud", email: "warden@vell-hut.example", role: "customer", note: "customer (the Vell Ridge mountain hut)" },

@@ -43,7 +43,14 @@ export const DEMO_SITES: DemoSite[] = [
         { name: "Laptop charging", powerW: 65, quantity: 2, hoursPerDay: 3, daysPerWeek: 5, circuit: "ac" },
       ],
     },
-    plan: { name: "Hut kit, 24 V lithium", systemVoltageV: 24, module: "Fellmark Solar FM-380H", controller: "Amberlow Electric AE-MPPT60", battery: "Wickfold Power WP-LFP24-200", inverter: "Amberlow Electric AE-SW2000-24" },
+    plan: {
+      name: "Hut kit, 24 V lithium",
+      systemVoltageV: 24,
+      module: "Fellmark Solar FM-380H",
+      controller: "Amberlow Electric AE-MPPT60",
+      battery: "Wickfold Power WP-LFP24-200",
+      inverter: "Amberlow Electric AE-SW2000-24",
+    },
   },
   {
     site: {
@@ -66,11 +73,27 @@ export const DEMO_SITES: DemoSite[] = [
     loadSheet: {
       name: "Irrigation season",
       appliances: [
-        { name: "Borehole pump (DC, brushless)", powerW: 600, quantity: 1, hoursPerDay: 5, daysPerWeek: 7, circuit: "dc", surgeW: 900, months: [4, 5, 6, 7, 8, 9] },
+        {
+          name: "Borehole pump (DC, brushless)",
+          powerW: 600,
+          quantity: 1,
+          hoursPerDay: 5,
+          daysPerWeek: 7,
+          circuit: "dc",
+          surgeW: 900,
+          months: [4, 5, 6, 7, 8, 9],
+        },
         { name: "Telemetry unit", powerW: 4, quantity: 1, hoursPerDay: 24, daysPerWeek: 7, circuit: "dc" },
       ],
     },
-    plan: { name: "Pump kit, 48 V", systemVoltageV: 48, module: "Harrowgate Cells HG-415T108", controller: "Amberlow Electric AE-MPPT60", battery: "Wickfold Power WP-LFP48-100", inverter: null },
+    plan: {
+      name: "Pump kit, 48 V",
+      systemVoltageV: 48,
+      module: "Harrowgate Cells HG-415T108",
+      controller: "Amberlow Electric AE-MPPT60",
+      battery: "Wickfold Power WP-LFP48-100",
+      inverter: null,
+    },
   },
   {
     site: {
@@ -98,6 +121,13 @@ export const DEMO_SITES: DemoSite[] = [
         { name: "Lights", powerW: 9, quantity: 10, hoursPerDay: 4, daysPerWeek: 7, circuit: "dc" },
       ],
     },
-    plan: { name: "Station kit, 24 V AGM", systemVoltageV: 24, module: "Quillon Photonics QP-330P60", controller: "Amberlow Electric AE-MPPT60", battery: "Korrowdale Storage KS-200GEL", inverter: "Amberlow Electric AE-SW2000-24" },
+    plan: {
+      name: "Station kit, 24 V AGM",
+      systemVoltageV: 24,
+      module: "Quillon Photonics QP-330P60",
+      controller: "Amberlow Electric AE-MPPT60",
+      battery: "Korrowdale Storage KS-200GEL",
+      inverter: "Amberlow Electric AE-SW2000-24",
+    },
   },
 ];

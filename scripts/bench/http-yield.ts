@@ -18,7 +18,14 @@ export function rssMb(pid: number) {
   return Number(status.match(/VmRSS:\s+(\d+)/)![1]) / 1024;
 }
 
-export async function load(opts: { url: string; method?: "GET" | "POST"; headers?: Record<string, string>; body?: string; seconds: number; connections?: number }): Promise<LoadFigures> {
+export async function load(opts: {
+  url: string;
+  method?: "GET" | "POST";
+  headers?: Record<string, string>;
+  body?: string;
+  seconds: number;
+  connections?: number;
+}): Promise<LoadFigures> {
   const result = await autocannon({
     url: opts.url,
     method: opts.method ?? "GET",

@@ -36,6 +36,8 @@ export function printReadingsBench() {
     const started = performance.now();
     for (let i = 0; i < runs; i++) evaluateReading(CONDITIONS, MODULE, { csv });
     const ms = (performance.now() - started) / runs;
-    console.log(`  sweep of ${String(points).padStart(4)} points (${(csv.length / 1024).toFixed(1).padStart(4)} KB): ${ms.toFixed(2)} ms to parse, analyse and normalise`);
+    console.log(
+      `  sweep of ${String(points).padStart(4)} points (${(csv.length / 1024).toFixed(1).padStart(4)} KB): ${ms.toFixed(2)} ms to parse, analyse and normalise`,
+    );
   }
 }

@@ -30,12 +30,16 @@ export async function bootLocalStack(ports: ServicePorts = LOCAL_PORTS) {
   const lockFile = `/var/tmp/kitwright-start-${ports.app}.pid`;
   const pid = runningPid(lockFile);
   if (pid) {
-    console.error(`Kitwright is already running (process ${pid}) at http://127.0.0.1:${ports.app}. Stop it with Ctrl-C in its terminal, or choose another PORT.`);
+    console.error(
+      `Kitwright is already running (process ${pid}) at http://127.0.0.1:${ports.app}. Stop it with Ctrl-C in its terminal, or choose another PORT.`,
+    );
     process.exit(1);
   }
   for (const [name, port] of Object.entries(ports)) {
     if (await isPortInUse(port)) {
-      console.error(`Port ${port} (${name}) is already in use: is another Kitwright or another program running? Stop it or set another port (see .env.example).`);
+      console.error(
+        `Port ${port} (${name}) is already in use: is another Kitwright or another program running? Stop it or set another port (see .env.example).`,
+      );
       process.exit(1);
     }
   }

@@ -75,7 +75,9 @@ export function isClusterRunning({ dataDir }: ClusterOptions, binDir: string): b
 export function startCluster(opts: ClusterOptions, binDir: string) {
   if (isClusterRunning(opts, binDir)) return false;
   if (portTaken(opts.port)) {
-    throw new Error(`Port ${opts.port} is used by another program (another PostgreSQL?). Stop it, or choose another port (KITWRIGHT_PG_PORT / KITWRIGHT_TEST_PG_PORT).`);
+    throw new Error(
+      `Port ${opts.port} is used by another program (another PostgreSQL?). Stop it, or choose another port (KITWRIGHT_PG_PORT / KITWRIGHT_TEST_PG_PORT).`,
+    );
   }
   const serverOptions = `-c listen_addresses=127.0.0.1 -p ${opts.port} -c unix_socket_directories=${opts.dataDir} -c max_connections=200`;
   run(join(binDir, "pg_ctl"), ["-D", opts.dataDir, "-l", join(opts.dataDir, "server.log"), "-w", "-o", serverOptions, "start"], {
@@ -87,7 +89,10 @@ export function startCluster(opts: ClusterOptions, binDir: string) {
 
 function portTaken(port: number) {
   // A synchronous probe: this runs before anything else is started.
-  const probe = spawnSync(process.execPath, ["-e", `require("net").connect(${port}, "127.0.0.1").on("connect", () => process.exit(0)).on("error", () => process.exit(1))`]);
+  const probe = spawnSync(process.execPath, [
+    "-e",
+    `require("net").connect(${port}, "127.0.0.1").on("connect", () => process.exit(0)).on("error", () => process.exit(1))`,
+  ]);
   return probe.status === 0;
 }
 

@@ -42,7 +42,10 @@ export async function seedDemo(log: (line: string) => void = () => {}) {
 /** Seeds only a database with no users yet, so `npm start` never overwrites someone's work. */
 export async function seedIfEmpty() {
   const { db } = await import("../../app/server/db.server");
-  const { count } = await db.selectFrom("user").select((eb) => eb.fn.countAll<number>().as("count")).executeTakeFirstOrThrow();
+  const { count } = await db
+    .selectFrom("user")
+    .select((eb) => eb.fn.countAll<number>().as("count"))
+    .executeTakeFirstOrThrow();
   if (Number(count) > 0) return false;
   await seedDemo();
   return true;

@@ -34,7 +34,17 @@ export async function seedDemoPlanning(log: (line: string) => void) {
       log(`  (no demo plan: a part of "${demo.plan.name}" is not in the catalogue)`);
       continue;
     }
-    const outcome = await planFromChoices(team.id, { name: demo.plan.name, siteId, loadSheetId, systemVoltageV: demo.plan.systemVoltageV, moduleId, controllerId, batteryId, inverterId, design: DEFAULT_DESIGN });
+    const outcome = await planFromChoices(team.id, {
+      name: demo.plan.name,
+      siteId,
+      loadSheetId,
+      systemVoltageV: demo.plan.systemVoltageV,
+      moduleId,
+      controllerId,
+      batteryId,
+      inverterId,
+      design: DEFAULT_DESIGN,
+    });
     if (!outcome.ok) {
       log(`  (no demo plan: ${outcome.message} ${JSON.stringify(outcome.fields)})`);
       continue;

@@ -8,7 +8,18 @@ import type { Database } from "../../app/server/db-schema";
 import { DEMO_READINGS, VELL_READING_PLACE, type DemoReading } from "../../data/demo/readings";
 import { demoModulePhoto } from "./demo-photo";
 
-type ModuleRow = { id: string; pmax_w: number; vmp_v: number; imp_a: number; voc_v: number; isc_a: number; gamma_pmax_pct_per_c: number; beta_voc_pct_per_c: number; alpha_isc_pct_per_c: number; noct_c: number };
+type ModuleRow = {
+  id: string;
+  pmax_w: number;
+  vmp_v: number;
+  imp_a: number;
+  voc_v: number;
+  isc_a: number;
+  gamma_pmax_pct_per_c: number;
+  beta_voc_pct_per_c: number;
+  alpha_isc_pct_per_c: number;
+  noct_c: number;
+};
 
 /** A deterministic generator, so the demo draws the same sweeps every time. */
 function lcg(seed: number) {
@@ -30,7 +41,9 @@ async function drawMeasurement(spec: DemoReading, module: ModuleRow, index: numb
       ? clearSkyPlaneOfArrayAt({ instantUtc: takenAtUtc, ...VELL_READING_PLACE, tiltDeg: spec.tiltDeg, azimuthDeg: spec.azimuthDeg, albedo: 0.2 }).poaWm2
       : spec.irradiance.wm2;
   const cellC =
-    spec.backSheetC === null ? readingCellTemperatureC({ kind: "air", airC: spec.airTempC, noctC: module.noct_c }, irradianceWm2) : readingCellTemperatureC({ kind: "back-sheet", backSheetC: spec.backSheetC }, irradianceWm2);
+    spec.backSheetC === null
+      ? readingCellTemperatureC({ kind: "air", airC: spec.airTempC, noctC: module.noct_c }, irradianceWm2)
+      : readingCellTemperatureC({ kind: "back-sheet", backSheetC: spec.backSheetC }, irradianceWm2);
   const targetW = spec.stcRatio * module.pmax_w * (irradianceWm2 / 1000) * (1 + (module.gamma_pmax_pct_per_c / 100) * (cellC - 25));
   const keyPoints = translateKeyPoints(
     { vocV: module.voc_v, iscA: module.isc_a, vmpV: module.vmp_v, impA: module.imp_a },
@@ -79,7 +92,13 @@ export async function seedDemoReadings(db: Kysely<Database>, log: (line: string)
       continue;
     }
     const drawn = await drawMeasurement(spec, module, index);
-    const existing = await db.selectFrom("field_reading").select("id").where("module_id", "=", module.id).where("submitted_by", "=", submitter.id).where("taken_at", "=", drawn.takenAtUtc).executeTakeFirst();
+    const existing = await db
+      .selectFrom("field_reading")
+      .select("id")
+      .where("module_id", "=", module.id)
+      .where("submitted_by", "=", submitter.id)
+      .where("taken_at", "=", drawn.takenAtUtc)
+      .executeTakeFirst();
     touched.add(module.id);
     if (existing) continue;
 
@@ -110,7 +129,14 @@ export async function seedDemoReadings(db: Kysely<Database>, log: (line: string)
       const { createHash } = await import("node:crypto");
       const file = await trx
         .insertInto("stored_file")
-        .values({ uploaded_by: submitter.id, content_type: "image/png", byte_size: photo.byteLength, sha256: createHash("sha256").update(photo).digest("hex"), bytes: photo, created_at: createdAt })
+        .values({
+          uploaded_by: submitter.id,
+          content_type: "image/png",
+          byte_size: photo.byteLength,
+          sha256: createHash("sha256").update(photo).digest("hex"),
+          bytes: photo,
+          created_at: createdAt,
+        })
         .returning("id")
         .executeTakeFirstOrThrow();
       const row = await trx

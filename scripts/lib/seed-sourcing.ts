@@ -19,10 +19,24 @@ export async function seedDemoSourcing(db: Kysely<Database>, log: (line: string)
   const teamId = options.teamId ?? (await db.selectFrom("organization").select("id").where("slug", "=", DEMO_SOURCING_TEAM).executeTakeFirst())?.id;
   if (!teamId) return log(`sourcing: no team "${DEMO_SOURCING_TEAM}", skipped`);
 
-  await db.insertInto("team_sourcing_settings").values({ team_id: teamId, quoting_currency: DEMO_QUOTING_CURRENCY }).onConflict((oc) => oc.column("team_id").doNothing()).execute();
+  await db
+    .insertInto("team_sourcing_settings")
+    .values({ team_id: teamId, quoting_currency: DEMO_QUOTING_CURRENCY })
+    .onConflict((oc) => oc.column("team_id").doNothing())
+    .execute();
   for (const r of DEMO_RATES) {
-    const any = await db.selectFrom("exchange_rate").select("id").where("team_id", "=", teamId).where("from_currency", "=", r.from).where("to_currency", "=", r.to).executeTakeFirst();
-    if (!any) await db.insertInto("exchange_rate").values({ team_id: teamId, from_currency: r.from, to_currency: r.to, rate: r.rate, as_of: shiftDays(today, -r.daysAgo), created_by: null }).execute();
+    const any = await db
+      .selectFrom("exchange_rate")
+      .select("id")
+      .where("team_id", "=", teamId)
+      .where("from_currency", "=", r.from)
+      .where("to_currency", "=", r.to)
+      .executeTakeFirst();
+    if (!any)
+      await db
+        .insertInto("exchange_rate")
+        .values({ team_id: teamId, from_currency: r.from, to_currency: r.to, rate: r.rate, as_of: shiftDays(today, -r.daysAgo), created_by: null })
+        .execute();
   }
 
   const supplierIds = new Map<string, string>();
@@ -66,7 +80,13 @@ export async function seedDemoSourcing(db: Kysely<Database>, log: (line: string)
       continue;
     }
     const supplierId = supplierIds.get(o.supplier)!;
-    const existing = await db.selectFrom("offer").select("id").where("supplier_id", "=", supplierId).where("part_kind", "=", o.kind).where("part_id", "=", part.id).executeTakeFirst();
+    const existing = await db
+      .selectFrom("offer")
+      .select("id")
+      .where("supplier_id", "=", supplierId)
+      .where("part_kind", "=", o.kind)
+      .where("part_id", "=", part.id)
+      .executeTakeFirst();
     if (existing) continue;
     await db.transaction().execute(async (trx) => {
       const offer = await trx

@@ -126,7 +126,9 @@ it("an installer submits a sweep, the curator approves it, and the module's veri
   expect(after.readings.measuredDensityWm2).not.toBe(before.readings.measuredDensityWm2);
   await page.goto(readingUrl);
   await page.getByText("Approved").first().waitFor();
-  expect(await page.getByTestId("module-verified").textContent()).toContain(`${after.readings.verifiedPmaxW.toFixed(1)} W verified from ${after.readings.approvedCount} readings`);
+  expect(await page.getByTestId("module-verified").textContent()).toContain(
+    `${after.readings.verifiedPmaxW.toFixed(1)} W verified from ${after.readings.approvedCount} readings`,
+  );
   await page.getByText("Clear day, pyranometer in plane, label readable in the photo.").waitFor();
   await snap(page, "field-reading-approved");
 

@@ -14,8 +14,11 @@ async function choose(page: Page, selectId: string, optionText: string) {
 
 async function replanned(page: Page) {
   // Several quick edits may start several re-plans: wait until none has been running for a moment.
-  await page.getByText("Re-planning…").waitFor({ state: "visible", timeout: 5000 }).catch(() => {});
-  for (let quiet = 0; quiet < 3; ) {
+  await page
+    .getByText("Re-planning…")
+    .waitFor({ state: "visible", timeout: 5000 })
+    .catch(() => {});
+  for (let quiet = 0; quiet < 3;) {
     await page.waitForTimeout(200);
     quiet = (await page.getByText("Re-planning…").count()) === 0 ? quiet + 1 : 0;
   }

@@ -9,7 +9,10 @@ async function annualKWh(page: import("playwright-core").Page) {
 
 async function settled(page: import("playwright-core").Page) {
   // The page recalculates 350 ms after the last edit; wait for the request to start and to finish.
-  await page.getByText("Recalculating…").waitFor({ state: "visible", timeout: 5000 }).catch(() => {});
+  await page
+    .getByText("Recalculating…")
+    .waitFor({ state: "visible", timeout: 5000 })
+    .catch(() => {});
   await page.getByText("Recalculating…").waitFor({ state: "hidden" });
 }
 

@@ -11,7 +11,9 @@ const SUPPLIER = "Kestrel Row Wholesale";
 
 /** The models of one supplier's rows, in the order the table shows them. */
 async function modelsOf(page: Page, supplier: string) {
-  return page.locator(`[data-testid="compare-table"] tbody tr[data-supplier="${supplier}"]`).evaluateAll((rows) => rows.map((r) => r.getAttribute("data-model")));
+  return page
+    .locator(`[data-testid="compare-table"] tbody tr[data-supplier="${supplier}"]`)
+    .evaluateAll((rows) => rows.map((r) => r.getAttribute("data-model")));
 }
 
 function pairOrder(models: (string | null)[]) {
@@ -63,6 +65,8 @@ it("imports a price list after a dry run, then ranks modules per verified watt",
   await snap(page, "sourcing-compare-verified");
 
   // The pound offers show their rate and its date.
-  expect(await page.locator('tr[data-supplier="Carrick & Dunmore Components"]').first().textContent()).toMatch(/1 GBP = 1\.1725 EUR, rate of \d{4}-\d{2}-\d{2}/);
+  expect(await page.locator('tr[data-supplier="Carrick & Dunmore Components"]').first().textContent()).toMatch(
+    /1 GBP = 1\.1725 EUR, rate of \d{4}-\d{2}-\d{2}/,
+  );
   await browser.close();
 });

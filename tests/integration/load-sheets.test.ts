@@ -32,7 +32,12 @@ describe("load sheets", () => {
   it("saves appliances for a site and reads them back", async () => {
     const a = await installerWithTeam("loads-a");
     const siteId = await siteFor(a.teamId);
-    const saved = await a.client.action(loadSheetNew, `/sites/${siteId}/loads/new`, { sheet: JSON.stringify({ name: "Winter use", appliances: [fridge, lights] }) }, { siteId });
+    const saved = await a.client.action(
+      loadSheetNew,
+      `/sites/${siteId}/loads/new`,
+      { sheet: JSON.stringify({ name: "Winter use", appliances: [fridge, lights] }) },
+      { siteId },
+    );
     expect(saved.status, JSON.stringify(saved.data)).toBe(302);
     const row = await db.selectFrom("load_sheet").selectAll().where("team_id", "=", a.teamId).executeTakeFirstOrThrow();
     expect(row.appliances).toEqual([fridge, lights]);
@@ -67,7 +72,10 @@ describe("load sheets", () => {
     const params = { siteId, loadSheetId: sheet.id };
     expect((await b.client.loader(loadSheet, `/sites/${siteId}/loads/${sheet.id}`, params)).status).toBe(404);
     expect((await b.client.action(loadSheet, `/sites/${siteId}/loads/${sheet.id}`, { intent: "delete" }, params)).status).toBe(404);
-    expect((await b.client.action(loadSheetNew, `/sites/${siteId}/loads/new`, { sheet: JSON.stringify({ name: "Sneaky", appliances: [fridge] }) }, { siteId })).status).toBe(404);
+    expect(
+      (await b.client.action(loadSheetNew, `/sites/${siteId}/loads/new`, { sheet: JSON.stringify({ name: "Sneaky", appliances: [fridge] }) }, { siteId }))
+        .status,
+    ).toBe(404);
     // A's own sheet id under another of A's sites is not found either (sheets belong to their site).
     const otherSite = await siteFor(a.teamId);
     expect((await a.client.loader(loadSheet, `/sites/${otherSite}/loads/${sheet.id}`, { siteId: otherSite, loadSheetId: sheet.id })).status).toBe(404);

@@ -11,7 +11,14 @@ import * as previewApi from "~/routes/api.v1.plans-preview";
 import { db } from "~/server/db.server";
 import type { KitPlan } from "~/domain/sizing/plan-types";
 
-async function api(mod: { loader?: Function; action?: Function }, kind: "loader" | "action", client: { cookieHeader(): string }, path: string, body?: unknown, params: Record<string, string> = {}) {
+async function api(
+  mod: { loader?: Function; action?: Function },
+  kind: "loader" | "action",
+  client: { cookieHeader(): string },
+  path: string,
+  body?: unknown,
+  params: Record<string, string> = {},
+) {
   const request = new Request(`http://127.0.0.1:3999${path}`, {
     method: kind === "action" ? "POST" : "GET",
     headers: { "Content-Type": "application/json", Cookie: client.cookieHeader() },
@@ -90,14 +97,26 @@ describe("kit plans", () => {
 
     expect((await a.client.action(plan, `/plans/${planId}`, { intent: "override", checkId: "array.voc-cold", reason: "ok" }, { planId })).status).toBe(400);
     const passing = result.checks.find((c) => c.status === "pass")!;
-    expect((await a.client.action(plan, `/plans/${planId}`, { intent: "override", checkId: passing.id, reason: "A long enough reason here." }, { planId })).status).toBe(400);
-    const ok = await a.client.action(plan, `/plans/${planId}`, { intent: "override", checkId: "array.voc-cold", reason: "Site never below −5 °C: heated plant room, checked by the engineer." }, { planId });
+    expect(
+      (await a.client.action(plan, `/plans/${planId}`, { intent: "override", checkId: passing.id, reason: "A long enough reason here." }, { planId })).status,
+    ).toBe(400);
+    const ok = await a.client.action(
+      plan,
+      `/plans/${planId}`,
+      { intent: "override", checkId: "array.voc-cold", reason: "Site never below −5 °C: heated plant room, checked by the engineer." },
+      { planId },
+    );
     expect(ok.status).toBe(302);
     const overrides = (await a.client.loader(plan, `/plans/${planId}`, { planId })).data.revision.overrides;
     expect(overrides).toEqual([expect.objectContaining({ checkId: "array.voc-cold", byName: "Test plan-override" })]);
 
     // A layout of 3 in series turns the failing check green in a new revision.
-    const fixed = await a.client.action(plan, `/plans/${planId}`, { intent: "save-revision", note: "Shorter strings", choices: JSON.stringify(choices(setup, {}, { modulesInSeries: 3, stringsInParallel: 2 })) }, { planId });
+    const fixed = await a.client.action(
+      plan,
+      `/plans/${planId}`,
+      { intent: "save-revision", note: "Shorter strings", choices: JSON.stringify(choices(setup, {}, { modulesInSeries: 3, stringsInParallel: 2 })) },
+      { planId },
+    );
     expect(fixed.status, JSON.stringify(fixed.data)).toBe(302);
     const green = (await a.client.loader(plan, `/plans/${planId}`, { planId })).data.revision.result as KitPlan;
     expect(green.checks.find((c) => c.id === "array.voc-cold")!.status).toBe("pass");
@@ -113,7 +132,10 @@ describe("kit plans", () => {
     expect(result.status).toBe(400);
     expect(result.data.errors).toMatchObject({ loadSheetId: expect.stringMatching(/this site/), moduleId: expect.stringMatching(/No such module/) });
     const typo = await a.client.action(plansNew, "/plans/new", { choices: JSON.stringify(choices(setup, {}, { autonomyDays: 0, arrayToControllerM: "far" })) });
-    expect(typo.data.errors).toMatchObject({ "design.autonomyDays": expect.stringMatching(/at least 0.5/), "design.arrayToControllerM": expect.stringMatching(/number/) });
+    expect(typo.data.errors).toMatchObject({
+      "design.autonomyDays": expect.stringMatching(/at least 0.5/),
+      "design.arrayToControllerM": expect.stringMatching(/number/),
+    });
     expect((await a.client.action(plansNew, "/plans/new", { choices: "{broken" })).status).toBe(400);
     expect(await db.selectFrom("kit_plan").select("id").where("team_id", "=", a.teamId).execute()).toHaveLength(0);
   });

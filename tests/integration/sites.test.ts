@@ -34,7 +34,12 @@ function siteForm(overrides: Record<string, string> = {}) {
   return { ...form, ...overrides };
 }
 
-async function callApi(mod: { loader?: Function; action?: Function }, kind: "loader" | "action", path: string, init: { headers?: Record<string, string>; body?: unknown; params?: Record<string, string> }) {
+async function callApi(
+  mod: { loader?: Function; action?: Function },
+  kind: "loader" | "action",
+  path: string,
+  init: { headers?: Record<string, string>; body?: unknown; params?: Record<string, string> },
+) {
   const request = new Request(`http://127.0.0.1:3999${path}`, {
     method: kind === "action" ? "POST" : "GET",
     headers: { "Content-Type": "application/json", ...init.headers },
@@ -76,7 +81,14 @@ describe("sites", () => {
     const result = await a.client.action(
       sitesNew,
       "/sites/new",
-      siteForm({ latitudeDeg: "95", timeZone: "Mars/Olympus", "months[3].ghiKWhM2Day": "", "months[0].tMinC": "5", "months[0].tMaxC": "-2", coldestTempC: "abc" }),
+      siteForm({
+        latitudeDeg: "95",
+        timeZone: "Mars/Olympus",
+        "months[3].ghiKWhM2Day": "",
+        "months[0].tMinC": "5",
+        "months[0].tMaxC": "-2",
+        coldestTempC: "abc",
+      }),
     );
     expect(result.status).toBe(400);
     const errors = result.data.result.error;
@@ -128,13 +140,22 @@ describe("sites API", () => {
     };
     const created = await callApi(sitesApi, "action", "/api/v1/sites", { headers: { Authorization: `Bearer ${keyA}` }, body });
     expect(created.status).toBe(201);
-    const read = await callApi(siteApi, "loader", `/api/v1/sites/${created.body.id}`, { headers: { Authorization: `Bearer ${keyA}` }, params: { siteId: created.body.id } });
+    const read = await callApi(siteApi, "loader", `/api/v1/sites/${created.body.id}`, {
+      headers: { Authorization: `Bearer ${keyA}` },
+      params: { siteId: created.body.id },
+    });
     expect(read.body.name).toBe("Pump well");
-    const foreign = await callApi(siteApi, "loader", `/api/v1/sites/${created.body.id}`, { headers: { Authorization: `Bearer ${keyB}` }, params: { siteId: created.body.id } });
+    const foreign = await callApi(siteApi, "loader", `/api/v1/sites/${created.body.id}`, {
+      headers: { Authorization: `Bearer ${keyB}` },
+      params: { siteId: created.body.id },
+    });
     expect(foreign.status).toBe(404);
     const listB = await callApi(sitesApi, "loader", "/api/v1/sites", { headers: { Authorization: `Bearer ${keyB}` } });
     expect(listB.body.total).toBe(0);
-    const bad = await callApi(sitesApi, "action", "/api/v1/sites", { headers: { Authorization: `Bearer ${keyA}` }, body: { ...body, tiltDeg: 120, months: body.months.slice(0, 11) } });
+    const bad = await callApi(sitesApi, "action", "/api/v1/sites", {
+      headers: { Authorization: `Bearer ${keyA}` },
+      body: { ...body, tiltDeg: 120, months: body.months.slice(0, 11) },
+    });
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.body.error.fields)).toEqual(expect.arrayContaining(["months"]));
     expect((await callApi(sitesApi, "loader", "/api/v1/sites", {})).status).toBe(401);

@@ -64,7 +64,13 @@ describe("POST /api/v1/yield", () => {
       expect(m.energyWhPerDay).toBeGreaterThan(0);
     });
     expect(result.body.worstMonth).toBeGreaterThanOrEqual(1);
-    expect(result.body.annualKWh).toBeCloseTo(result.body.months.reduce((s: number, m: { energyWhPerDay: number }, i: number) => s + (m.energyWhPerDay * [31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31][i]) / 1000, 0), 1);
+    expect(result.body.annualKWh).toBeCloseTo(
+      result.body.months.reduce(
+        (s: number, m: { energyWhPerDay: number }, i: number) => s + (m.energyWhPerDay * [31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31][i]) / 1000,
+        0,
+      ),
+      1,
+    );
   });
 
   it("accepts a team API key, and resolves a catalogue module by id", async () => {
@@ -72,7 +78,24 @@ describe("POST /api/v1/yield", () => {
     const created = await owner.client.action(teamApiKeys, "/team/api-keys", { intent: "create", name: "Yield bench" });
     const module = await db
       .insertInto("pv_module")
-      .values({ maker: "Test Maker", model: `T-${Date.now()}`, cell_technology: "mono-PERC", cells_in_series: 36, pmax_w: 100, vmp_v: 18.2, imp_a: 5.5, voc_v: 22.1, isc_a: 5.9, gamma_pmax_pct_per_c: -0.4, beta_voc_pct_per_c: -0.3, alpha_isc_pct_per_c: 0.05, noct_c: 45, length_mm: 1000, width_mm: 670, mass_kg: 7 })
+      .values({
+        maker: "Test Maker",
+        model: `T-${Date.now()}`,
+        cell_technology: "mono-PERC",
+        cells_in_series: 36,
+        pmax_w: 100,
+        vmp_v: 18.2,
+        imp_a: 5.5,
+        voc_v: 22.1,
+        isc_a: 5.9,
+        gamma_pmax_pct_per_c: -0.4,
+        beta_voc_pct_per_c: -0.3,
+        alpha_isc_pct_per_c: 0.05,
+        noct_c: 45,
+        length_mm: 1000,
+        width_mm: 670,
+        mass_kg: 7,
+      })
       .returning("id")
       .executeTakeFirstOrThrow();
     const byFigures = await post(new RouteClient(), madisonBody(), { Authorization: `Bearer ${created.data.created.key}` });
@@ -83,10 +106,18 @@ describe("POST /api/v1/yield", () => {
     expect(byId.body.assumptions.join(" ")).toContain("Test Maker");
     // Verified power (85 % of nameplate from 4 readings) lowers the energy in proportion, and says so.
     await db.updateTable("pv_module").set({ verified_pmax_w: 85, verified_reading_count: 4 }).where("id", "=", module.id).execute();
-    const verified = await post(new RouteClient(), { ...madisonBody(), module: { moduleId: module.id }, powerBasis: "verified" }, { Authorization: `Bearer ${created.data.created.key}` });
+    const verified = await post(
+      new RouteClient(),
+      { ...madisonBody(), module: { moduleId: module.id }, powerBasis: "verified" },
+      { Authorization: `Bearer ${created.data.created.key}` },
+    );
     expect(verified.body.annualKWh / byId.body.annualKWh).toBeCloseTo(0.85, 2);
     expect(verified.body.assumptions.join(" ")).toMatch(/verified 85\.0 W at STC from 4 approved field reading/);
-    const unknown = await post(new RouteClient(), { ...madisonBody(), module: { moduleId: "00000000-0000-0000-0000-000000000000" } }, { Authorization: `Bearer ${created.data.created.key}` });
+    const unknown = await post(
+      new RouteClient(),
+      { ...madisonBody(), module: { moduleId: "00000000-0000-0000-0000-000000000000" } },
+      { Authorization: `Bearer ${created.data.created.key}` },
+    );
     expect(unknown.status).toBe(400);
     expect(unknown.body.error.fields["module.moduleId"]).toMatch(/No module/);
   });
@@ -99,10 +130,22 @@ describe("POST /api/v1/yield", () => {
     ["tilt over 90", { ...base, site: { ...base.site, tiltDeg: 95 } }, "site.tiltDeg"],
     ["tilt missing", { ...base, site: { ...base.site, tiltDeg: undefined } }, "site.tiltDeg"],
     ["11 months", { ...base, site: { ...base.site, months: months.slice(0, 11) } }, "site.months"],
-    ["negative irradiation", { ...base, site: { ...base.site, months: months.map((m, i) => (i === 3 ? { ...m, ghiKWhM2Day: -1 } : m)) } }, "site.months.3.ghiKWhM2Day"],
-    ["clearness index of 1.2", { ...base, site: { ...base.site, months: months.map(({ ghiKWhM2Day, ...m }, i) => (i === 5 ? { ...m, clearnessIndex: 1.2 } : { ...m, ghiKWhM2Day })) } }, "site.months.5.clearnessIndex"],
+    [
+      "negative irradiation",
+      { ...base, site: { ...base.site, months: months.map((m, i) => (i === 3 ? { ...m, ghiKWhM2Day: -1 } : m)) } },
+      "site.months.3.ghiKWhM2Day",
+    ],
+    [
+      "clearness index of 1.2",
+      { ...base, site: { ...base.site, months: months.map(({ ghiKWhM2Day, ...m }, i) => (i === 5 ? { ...m, clearnessIndex: 1.2 } : { ...m, ghiKWhM2Day })) } },
+      "site.months.5.clearnessIndex",
+    ],
     ["tMin above tMax", { ...base, site: { ...base.site, months: months.map((m, i) => (i === 0 ? { ...m, tMinC: 5, tMaxC: 0 } : m)) } }, "site.months.0.tMinC"],
-    ["irradiation in MJ instead of kWh", { ...base, site: { ...base.site, months: months.map((m, i) => (i === 6 ? { ...m, ghiKWhM2Day: 22.58 } : m)) } }, "site.months.6.ghiKWhM2Day"],
+    [
+      "irradiation in MJ instead of kWh",
+      { ...base, site: { ...base.site, months: months.map((m, i) => (i === 6 ? { ...m, ghiKWhM2Day: 22.58 } : m)) } },
+      "site.months.6.ghiKWhM2Day",
+    ],
     ["Vmp above Voc", { ...base, module: { ...base.module, vmpV: 25 } }, "module.vmpV"],
     ["no module at all", { ...base, module: {} }, "module.moduleId"],
     ["unknown controller kind", { ...base, controller: { ...base.controller, kind: "magic" } }, "controller.kind"],

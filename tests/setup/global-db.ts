@@ -1,6 +1,14 @@
 // Vitest global setup for integration tests: a fresh database on the test cluster (started here when
 // it is not running), all migrations applied, and the mail fake listening. Workers inherit the env.
-import { dropDatabase, ensureCluster, ensureDatabase, findPostgresBinDir, otherTestDatabases, startCluster, stopCluster } from "../../scripts/lib/postgres-cluster";
+import {
+  dropDatabase,
+  ensureCluster,
+  ensureDatabase,
+  findPostgresBinDir,
+  otherTestDatabases,
+  startCluster,
+  stopCluster,
+} from "../../scripts/lib/postgres-cluster";
 import { execFileSync } from "node:child_process";
 import { startMailFake } from "../../fakes/mail-server";
 import { databaseUrl, INTEGRATION_DATABASE, TEST_CLUSTER } from "./test-env";

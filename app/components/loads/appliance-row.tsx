@@ -50,7 +50,12 @@ export function ApplianceRow({
       {input("hoursPerDay", "Hours per day", "text-right figures")}
       {input("daysPerWeek", "Days per week", "text-right figures")}
       <td className="px-1 py-1 align-top">
-        <select aria-label={`Circuit, line ${index + 1}`} value={row.circuit} onChange={(e) => onChange({ circuit: e.target.value as "ac" | "dc" })} className={cell}>
+        <select
+          aria-label={`Circuit, line ${index + 1}`}
+          value={row.circuit}
+          onChange={(e) => onChange({ circuit: e.target.value as "ac" | "dc" })}
+          className={cell}
+        >
           <option value="ac">AC</option>
           <option value="dc">DC</option>
         </select>
@@ -58,14 +63,18 @@ export function ApplianceRow({
       {input("surgeW", "Surge W", "text-right figures")}
       <td className="px-1 py-1 align-top">
         <details>
-          <summary className="cursor-pointer text-xs">{row.months.length === 12 ? "all year" : row.months.map((m) => MONTH_NAMES[m - 1]).join(" ") || "none"}</summary>
+          <summary className="cursor-pointer text-xs">
+            {row.months.length === 12 ? "all year" : row.months.map((m) => MONTH_NAMES[m - 1]).join(" ") || "none"}
+          </summary>
           <div className="mt-1 grid grid-cols-4 gap-1 text-xs">
             {MONTH_NAMES.map((name, i) => (
               <label key={name} className="inline-flex items-center gap-0.5">
                 <input
                   type="checkbox"
                   checked={row.months.includes(i + 1)}
-                  onChange={(e) => onChange({ months: e.target.checked ? [...row.months, i + 1].sort((a, b) => a - b) : row.months.filter((m) => m !== i + 1) })}
+                  onChange={(e) =>
+                    onChange({ months: e.target.checked ? [...row.months, i + 1].sort((a, b) => a - b) : row.months.filter((m) => m !== i + 1) })
+                  }
                 />
                 {name}
               </label>

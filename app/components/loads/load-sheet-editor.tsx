@@ -14,7 +14,11 @@ export interface InverterChoice {
   params: InverterLoadParams;
 }
 
-export const ASSUMED_INVERTER: InverterChoice = { id: "", label: "An assumed inverter: 90 % efficient, 10 W idle", params: { efficiencyPct: 90, idleDrawW: 10 } };
+export const ASSUMED_INVERTER: InverterChoice = {
+  id: "",
+  label: "An assumed inverter: 90 % efficient, 10 W idle",
+  params: { efficiencyPct: 90, idleDrawW: 10 },
+};
 
 export function LoadSheetEditor({
   initialName,
@@ -44,7 +48,13 @@ export function LoadSheetEditor({
         <label htmlFor="sheet-name" className="mb-1 block text-sm font-medium">
           Load sheet name
         </label>
-        <input id="sheet-name" value={name} onChange={(e) => setName(e.target.value)} aria-invalid={errors.name ? true : undefined} className="block w-full rounded-md border border-rule bg-sheet px-3 py-2" />
+        <input
+          id="sheet-name"
+          value={name}
+          onChange={(e) => setName(e.target.value)}
+          aria-invalid={errors.name ? true : undefined}
+          className="block w-full rounded-md border border-rule bg-sheet px-3 py-2"
+        />
         {errors.name ? <p className="mt-1 text-sm text-fail">✕ {errors.name}</p> : null}
       </div>
       <Panel title="Appliances">
@@ -77,7 +87,11 @@ export function LoadSheetEditor({
             </tbody>
           </table>
         </div>
-        <button type="button" onClick={() => setRows((rs) => [...rs, newDraft()])} className="mt-3 rounded-md border border-rule px-3 py-1.5 text-sm hover:bg-paper-deep">
+        <button
+          type="button"
+          onClick={() => setRows((rs) => [...rs, newDraft()])}
+          className="mt-3 rounded-md border border-rule px-3 py-1.5 text-sm hover:bg-paper-deep"
+        >
           + Add an appliance
         </button>
       </Panel>
@@ -86,7 +100,12 @@ export function LoadSheetEditor({
           <label htmlFor="totals-inverter" className="mb-1 block font-medium">
             AC through
           </label>
-          <select id="totals-inverter" value={inverterId} onChange={(e) => setInverterId(e.target.value)} className="block w-full rounded-md border border-rule bg-sheet px-3 py-2">
+          <select
+            id="totals-inverter"
+            value={inverterId}
+            onChange={(e) => setInverterId(e.target.value)}
+            className="block w-full rounded-md border border-rule bg-sheet px-3 py-2"
+          >
             <option value="">{ASSUMED_INVERTER.label}</option>
             {inverters.map((i) => (
               <option key={i.id} value={i.id}>

@@ -14,9 +14,17 @@ export function LoadTotals({ appliances, inverter, skipped }: { appliances: Appl
         <Figure label="Heaviest month" value={`${heaviest.totalWhPerDay.toFixed(0)} Wh/day`} note={MONTH_NAMES[heaviest.month - 1]} testId="heaviest-wh" />
         <Figure label="A year" value={`${summary.annualKWh.toFixed(0)} kWh`} />
         <Figure label="Peak AC at once" value={`${summary.peakAcW.toFixed(0)} W`} />
-        <Figure label="Largest surge" value={summary.largestSurge ? `${summary.largestSurge.surgeW.toFixed(0)} W` : "—"} note={summary.largestSurge?.appliance} />
+        <Figure
+          label="Largest surge"
+          value={summary.largestSurge ? `${summary.largestSurge.surgeW.toFixed(0)} W` : "—"}
+          note={summary.largestSurge?.appliance}
+        />
       </dl>
-      {ignored > 0 ? <p className="mb-2 text-sm text-warn">⚠ {ignored} line{ignored === 1 ? " is" : "s are"} incomplete and left out of the totals until fixed.</p> : null}
+      {ignored > 0 ? (
+        <p className="mb-2 text-sm text-warn">
+          ⚠ {ignored} line{ignored === 1 ? " is" : "s are"} incomplete and left out of the totals until fixed.
+        </p>
+      ) : null}
       <div className="overflow-x-auto">
         <table className="figures w-full text-right text-xs">
           <thead className="text-ink-faint">

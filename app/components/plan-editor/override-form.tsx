@@ -11,7 +11,15 @@ export function OverrideForm({ checkId, error }: { checkId: string; error?: stri
         <label htmlFor={`reason-${checkId}`} className="block">
           Why is it acceptable here? (kept with the plan, shown on the quote's record)
         </label>
-        <textarea id={`reason-${checkId}`} name="reason" rows={2} required minLength={10} maxLength={1000} className="w-full rounded-md border border-rule bg-sheet p-2" />
+        <textarea
+          id={`reason-${checkId}`}
+          name="reason"
+          rows={2}
+          required
+          minLength={10}
+          maxLength={1000}
+          className="w-full rounded-md border border-rule bg-sheet p-2"
+        />
         {error ? <p className="text-fail">✕ {error}</p> : null}
         <button type="submit" className="rounded-md border border-fail px-3 py-1 text-fail">
           Accept with this reason

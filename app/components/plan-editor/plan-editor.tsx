@@ -61,7 +61,9 @@ export function PlanEditor({
             </span>
           ) : null}
         </div>
-        <div className={pending ? "opacity-60 transition-opacity" : "transition-opacity"}>{shown ? renderPlan(shown) : <p className="text-ink-soft">Choose the parts to see the plan.</p>}</div>
+        <div className={pending ? "opacity-60 transition-opacity" : "transition-opacity"}>
+          {shown ? renderPlan(shown) : <p className="text-ink-soft">Choose the parts to see the plan.</p>}
+        </div>
       </div>
     </div>
   );

@@ -14,7 +14,14 @@ export function PlanHistory({ planId, history, current }: { planId: string; hist
       {history.map((h) => (
         <li key={h.revision} className="flex flex-wrap justify-between gap-2 py-2">
           <span>
-            {h.revision === current ? <strong>Revision {h.revision} (shown)</strong> : <Link to={`/plans/${planId}?revision=${h.revision}`} className="underline">Revision {h.revision}</Link>} — {h.note}
+            {h.revision === current ? (
+              <strong>Revision {h.revision} (shown)</strong>
+            ) : (
+              <Link to={`/plans/${planId}?revision=${h.revision}`} className="underline">
+                Revision {h.revision}
+              </Link>
+            )}{" "}
+            — {h.note}
           </span>
           <span className="text-ink-faint">
             {new Date(h.created_at).toISOString().slice(0, 16).replace("T", " ")} UTC{h.byName ? ` · ${h.byName}` : ""} ·{" "}

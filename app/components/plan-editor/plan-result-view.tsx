@@ -34,7 +34,9 @@ export function PlanResultView({
   const labels = sources?.parts ?? { module: "Module", controller: "Charge controller", battery: "Battery", inverter: plan.inverter ? "Inverter" : null };
   return (
     <div className="space-y-6">
-      {preview ? <p className="rounded-md border border-copper bg-copper-wash px-3 py-2 text-sm">✎ Preview — not saved until you save it as a new revision.</p> : null}
+      {preview ? (
+        <p className="rounded-md border border-copper bg-copper-wash px-3 py-2 text-sm">✎ Preview — not saved until you save it as a new revision.</p>
+      ) : null}
       <PlanCautions cautions={plan.cautions} />
       <PlanKeyFigures plan={plan} parts={parts} />
       <Panel title="Checks">

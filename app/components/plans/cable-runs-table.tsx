@@ -9,12 +9,24 @@ export function CableRunsTable({ cables }: { cables: readonly CableRunSizing[] }
       <table className="figures w-full min-w-[44rem] text-right text-sm">
         <thead className="border-b border-rule text-xs text-ink-faint">
           <tr>
-            <th scope="col" className="py-2 text-left font-medium">Run</th>
-            <th scope="col" className="px-2 text-left font-medium">Conductor</th>
-            <th scope="col" className="px-2 font-medium">One way</th>
-            <th scope="col" className="px-2 font-medium">Current</th>
-            <th scope="col" className="px-2 font-medium">Voltage drop</th>
-            <th scope="col" className="pl-2 font-medium">Fuse / breaker</th>
+            <th scope="col" className="py-2 text-left font-medium">
+              Run
+            </th>
+            <th scope="col" className="px-2 text-left font-medium">
+              Conductor
+            </th>
+            <th scope="col" className="px-2 font-medium">
+              One way
+            </th>
+            <th scope="col" className="px-2 font-medium">
+              Current
+            </th>
+            <th scope="col" className="px-2 font-medium">
+              Voltage drop
+            </th>
+            <th scope="col" className="pl-2 font-medium">
+              Fuse / breaker
+            </th>
           </tr>
         </thead>
         <tbody className="divide-y divide-rule">
@@ -29,8 +41,8 @@ export function CableRunsTable({ cables }: { cables: readonly CableRunSizing[] }
                   <>
                     <span className="whitespace-nowrap font-medium">{run.conductor.label}</span>
                     <span className="block text-xs text-ink-faint">
-                      {run.limitedBy === "current" ? "sized for current" : "sized for voltage drop"} · carries {formatNumber(run.conductor.ampacityA)} A, needs ≥{" "}
-                      {formatNumber(run.minAmpacityA, 1)} A
+                      {run.limitedBy === "current" ? "sized for current" : "sized for voltage drop"} · carries {formatNumber(run.conductor.ampacityA)} A, needs
+                      ≥ {formatNumber(run.minAmpacityA, 1)} A
                     </span>
                   </>
                 ) : (

@@ -68,8 +68,8 @@ export function EnergyVsLoadChart({ plan }: { plan: KitPlan }) {
         </ResponsiveContainer>
       </div>
       <figcaption className="mt-2 text-sm text-ink-soft" data-testid="energy-chart-caption">
-        {summary} Array energy: to the battery on the month's average day, after losses and shade. Required: the load ÷ the battery's round-trip
-        efficiency, plus the design margin.
+        {summary} Array energy: to the battery on the month's average day, after losses and shade. Required: the load ÷ the battery's round-trip efficiency,
+        plus the design margin.
       </figcaption>
     </figure>
   );

@@ -27,19 +27,35 @@ export function LayoutOptions({
           <caption className="sr-only">String layouts considered</caption>
           <thead className="border-b border-rule text-xs text-ink-faint">
             <tr>
-              <th scope="col" className="py-2 text-left font-medium">Layout</th>
-              <th scope="col" className="px-2 font-medium">Array W at STC</th>
-              <th scope="col" className="px-2 font-medium">Voc coldest morning</th>
-              <th scope="col" className="px-2 font-medium">Vmp hot afternoon</th>
-              <th scope="col" className="px-2 font-medium">Controller current</th>
-              <th scope="col" className="pl-2 text-left font-medium">Verdict</th>
+              <th scope="col" className="py-2 text-left font-medium">
+                Layout
+              </th>
+              <th scope="col" className="px-2 font-medium">
+                Array W at STC
+              </th>
+              <th scope="col" className="px-2 font-medium">
+                Voc coldest morning
+              </th>
+              <th scope="col" className="px-2 font-medium">
+                Vmp hot afternoon
+              </th>
+              <th scope="col" className="px-2 font-medium">
+                Controller current
+              </th>
+              <th scope="col" className="pl-2 text-left font-medium">
+                Verdict
+              </th>
             </tr>
           </thead>
           <tbody className="divide-y divide-rule">
             {rows.map((l) => {
               const picked = isChosen(l);
               return (
-                <tr key={`${l.modulesInSeries}x${l.stringsInParallel}`} className={`align-top *:py-1.5 ${picked ? "bg-copper-wash" : ""}`} data-chosen={picked || undefined}>
+                <tr
+                  key={`${l.modulesInSeries}x${l.stringsInParallel}`}
+                  className={`align-top *:py-1.5 ${picked ? "bg-copper-wash" : ""}`}
+                  data-chosen={picked || undefined}
+                >
                   <th scope="row" className="py-1.5 text-left font-normal">
                     <span className="whitespace-nowrap">{layoutWords(l.modulesInSeries, l.stringsInParallel)}</span>
                     <span className="block text-xs text-ink-faint">{l.moduleCount} modules</span>
@@ -50,14 +66,7 @@ export function LayoutOptions({
                     <Pair value={l.stringVocColdV} against={controller?.maxPvVocV} sign="≤" unit="V" status={l.vocOk ? "pass" : "fail"} words={VOC_WORDS} />
                   </td>
                   <td className="px-2">
-                    <Pair
-                      value={l.stringVmpHotV}
-                      against={l.stringVmpNeededV}
-                      sign="≥"
-                      unit="V"
-                      status={l.vmpStatus}
-                      words={VMP_WORDS}
-                    />
+                    <Pair value={l.stringVmpHotV} against={l.stringVmpNeededV} sign="≥" unit="V" status={l.vmpStatus} words={VMP_WORDS} />
                   </td>
                   <td className="px-2">
                     <Pair
@@ -89,9 +98,9 @@ export function LayoutOptions({
         </table>
       </div>
       <p className="mt-2 text-xs text-ink-faint">
-        Voc on the coldest morning must stay at or below the controller's maximum input voltage. Vmp on a hot afternoon must stay at or above the
-        battery's charging voltage plus the tracker's headroom (MPPT) or the switch and cable drop (PWM). Controller current: what an MPPT controller
-        delivers to the battery at the array's STC power, or 1.25 × the array's short-circuit current through a PWM controller.
+        Voc on the coldest morning must stay at or below the controller's maximum input voltage. Vmp on a hot afternoon must stay at or above the battery's
+        charging voltage plus the tracker's headroom (MPPT) or the switch and cable drop (PWM). Controller current: what an MPPT controller delivers to the
+        battery at the array's STC power, or 1.25 × the array's short-circuit current through a PWM controller.
       </p>
     </div>
   );

@@ -13,13 +13,27 @@ export function MonthlyArrayTable({ plan, verifiedReadingCount }: { plan: KitPla
           <caption className="sr-only">Energy, load and modules needed by month</caption>
           <thead className="border-b border-rule text-xs text-ink-faint">
             <tr>
-              <th scope="col" className="py-2 text-left font-medium">Month</th>
-              <th scope="col" className="px-2 font-medium">Per module Wh/day</th>
-              <th scope="col" className="px-2 font-medium">Load Wh/day</th>
-              <th scope="col" className="px-2 font-medium">Required Wh/day</th>
-              <th scope="col" className="px-2 font-medium">Modules needed</th>
-              <th scope="col" className="px-2 font-medium">Array Wh/day</th>
-              <th scope="col" className="pl-2 font-medium">Coverage</th>
+              <th scope="col" className="py-2 text-left font-medium">
+                Month
+              </th>
+              <th scope="col" className="px-2 font-medium">
+                Per module Wh/day
+              </th>
+              <th scope="col" className="px-2 font-medium">
+                Load Wh/day
+              </th>
+              <th scope="col" className="px-2 font-medium">
+                Required Wh/day
+              </th>
+              <th scope="col" className="px-2 font-medium">
+                Modules needed
+              </th>
+              <th scope="col" className="px-2 font-medium">
+                Array Wh/day
+              </th>
+              <th scope="col" className="pl-2 font-medium">
+                Coverage
+              </th>
             </tr>
           </thead>
           <tbody className="divide-y divide-rule">
@@ -48,9 +62,10 @@ export function MonthlyArrayTable({ plan, verifiedReadingCount }: { plan: KitPla
         </table>
       </div>
       <p className="mt-2 text-xs text-ink-faint">
-        Per module: one module's energy to the battery on the month's average day, after losses and shade, on {formatNumber(array.modulePmaxUsedW, array.modulePmaxUsedW % 1 === 0 ? 0 : 1)} W (
-        {powerBasisWords(array.powerBasisUsed, verifiedReadingCount)}). Required: the load ÷ the battery's round-trip efficiency, plus the design margin. Coverage: the
-        chosen {array.layout.moduleCount}-module array's energy ÷ what is required (100 % is exactly enough with the margin).
+        Per module: one module's energy to the battery on the month's average day, after losses and shade, on{" "}
+        {formatNumber(array.modulePmaxUsedW, array.modulePmaxUsedW % 1 === 0 ? 0 : 1)} W ({powerBasisWords(array.powerBasisUsed, verifiedReadingCount)}).
+        Required: the load ÷ the battery's round-trip efficiency, plus the design margin. Coverage: the chosen {array.layout.moduleCount}-module array's energy
+        ÷ what is required (100 % is exactly enough with the margin).
       </p>
     </div>
   );

@@ -28,9 +28,15 @@ export function PartsList({ plan, labels, parts }: { plan: KitPlan; labels: Part
           <caption className="sr-only">Parts</caption>
           <thead className="border-b border-rule text-xs text-ink-faint">
             <tr>
-              <th scope="col" className="w-14 py-2 text-right font-medium">Qty</th>
-              <th scope="col" className="px-3 text-left font-medium">Part</th>
-              <th scope="col" className="text-left font-medium">Figures that matter</th>
+              <th scope="col" className="w-14 py-2 text-right font-medium">
+                Qty
+              </th>
+              <th scope="col" className="px-3 text-left font-medium">
+                Part
+              </th>
+              <th scope="col" className="text-left font-medium">
+                Figures that matter
+              </th>
             </tr>
           </thead>
           <tbody className="divide-y divide-rule">
@@ -46,11 +52,13 @@ export function PartsList({ plan, labels, parts }: { plan: KitPlan; labels: Part
             <Row qty={1} kind="Charge controller" name={labels.controller} testId="part-controller">
               {parts?.controller ? (
                 <li>
-                  {parts.controller.kind === "mppt" ? "MPPT" : "PWM"}, up to {formatNumber(parts.controller.maxPvVocV)} V in, {formatNumber(parts.controller.maxChargeCurrentA)} A out
+                  {parts.controller.kind === "mppt" ? "MPPT" : "PWM"}, up to {formatNumber(parts.controller.maxPvVocV)} V in,{" "}
+                  {formatNumber(parts.controller.maxChargeCurrentA)} A out
                 </li>
               ) : null}
               <li>
-                String Voc on the coldest morning {formatNumber(layout.stringVocColdV, 1)} V; {formatNumber(layout.controllerOutputCurrentA, 1)} A at the array's STC power
+                String Voc on the coldest morning {formatNumber(layout.stringVocColdV, 1)} V; {formatNumber(layout.controllerOutputCurrentA, 1)} A at the
+                array's STC power
               </li>
             </Row>
             <Row qty={battery.batteryCount} kind={plural(battery.batteryCount, "Battery", "Batteries")} name={labels.battery} testId="part-battery">
@@ -68,8 +76,8 @@ export function PartsList({ plan, labels, parts }: { plan: KitPlan; labels: Part
             {inverter ? (
               <Row qty={1} kind="Inverter" name={labels.inverter ?? "Inverter"} testId="part-inverter">
                 <li>
-                  {formatNumber(inverter.continuousW)} W continuous, {formatNumber(inverter.surgeW)} W surge; the load needs {formatNumber(inverter.continuousNeededW)} W
-                  continuous
+                  {formatNumber(inverter.continuousW)} W continuous, {formatNumber(inverter.surgeW)} W surge; the load needs{" "}
+                  {formatNumber(inverter.continuousNeededW)} W continuous
                 </li>
                 <li>Draws up to {formatNumber(inverter.maxDcCurrentA, 1)} A from the battery</li>
               </Row>

@@ -1,8 +1,7 @@
 // The safety panel every plan shows: the domain's cautions, then the licensed-person rule, always last.
 import { useId } from "react";
 
-export const LICENSED_PERSON_RULE =
-  "The design must follow the local electrical code and be installed and signed off by a licensed person.";
+export const LICENSED_PERSON_RULE = "The design must follow the local electrical code and be installed and signed off by a licensed person.";
 
 export function PlanCautions({ cautions }: { cautions: readonly string[] }) {
   const headingId = useId();

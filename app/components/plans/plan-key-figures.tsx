@@ -35,7 +35,8 @@ export function PlanKeyFigures({ plan, parts }: { plan: KitPlan; parts?: PlanPar
           {parts?.battery ? `, ${CHEMISTRY_LABELS[parts.battery.chemistry]}` : ""}
         </Detail>
         <Detail>
-          <Fig value={battery.bankAh} unit="Ah" /> at <Fig value={plan.systemVoltageV} unit="V" /> · <Fig value={battery.bankNominalWh / 1000} digits={1} unit="kWh" /> nominal
+          <Fig value={battery.bankAh} unit="Ah" /> at <Fig value={plan.systemVoltageV} unit="V" /> ·{" "}
+          <Fig value={battery.bankNominalWh / 1000} digits={1} unit="kWh" /> nominal
         </Detail>
         {battery.autonomyDaysAchieved !== null ? (
           <Detail>
@@ -87,7 +88,8 @@ export function PlanKeyFigures({ plan, parts }: { plan: KitPlan; parts?: PlanPar
         {design ? (
           <>
             <Detail>
-              Needs <Fig value={design.requiredArrayWhPerDay} unit="Wh/day" /> from the array; one module gives <Fig value={design.energyPerModuleWhPerDay} unit="Wh/day" />
+              Needs <Fig value={design.requiredArrayWhPerDay} unit="Wh/day" /> from the array; one module gives{" "}
+              <Fig value={design.energyPerModuleWhPerDay} unit="Wh/day" />
             </Detail>
             <Detail>
               <Fig value={array.modulesRequired} digits={2} unit="modules" /> needed → {layout.moduleCount} chosen
@@ -99,7 +101,12 @@ export function PlanKeyFigures({ plan, parts }: { plan: KitPlan; parts?: PlanPar
         )}
       </Card>
 
-      <Card label="Simulated year" value={formatNumber(simulation.unmetDays)} unit={`${plural(simulation.unmetDays, "day")} with unmet load`} testId="key-unmet-days">
+      <Card
+        label="Simulated year"
+        value={formatNumber(simulation.unmetDays)}
+        unit={`${plural(simulation.unmetDays, "day")} with unmet load`}
+        testId="key-unmet-days"
+      >
         <Detail>
           Load met <Fig value={simulation.loadMetPct} digits={1} unit="%" /> · lowest charge <Fig value={simulation.minStateOfChargePct} unit="%" />
         </Detail>

@@ -28,7 +28,11 @@ export function StateOfChargeChart({
       : `Unmet load on ${simulation.unmetDays} ${plural(simulation.unmetDays, "day")} of the simulated year (${worstMonths.join(", ")}); the lowest state of charge was ${formatNumber(simulation.minStateOfChargePct)} %.`;
   return (
     <figure>
-      <div className="graph-paper h-72 w-full rounded-lg border border-rule p-2" role="img" aria-label={`Chart of the battery's state of charge through a simulated year. ${summary}`}>
+      <div
+        className="graph-paper h-72 w-full rounded-lg border border-rule p-2"
+        role="img"
+        aria-label={`Chart of the battery's state of charge through a simulated year. ${summary}`}
+      >
         <ResponsiveContainer width="100%" height="100%">
           <ComposedChart data={rows} margin={{ top: 10, right: 8, bottom: 0, left: 4 }}>
             <CartesianGrid stroke="#d9cfbd" strokeDasharray="2 4" />
@@ -60,14 +64,24 @@ export function StateOfChargeChart({
                 label={{ value: `depth-of-discharge floor ${formatNumber(floorPct)} %`, position: "insideBottomRight", fill: "#a12b2b", fontSize: 11 }}
               />
             ) : null}
-            <Area dataKey="soc" name="State of charge (%)" type="linear" stroke="#1d2333" strokeWidth={1.5} fill="#e3c9b3" fillOpacity={0.6} dot={false} isAnimationActive={false} />
+            <Area
+              dataKey="soc"
+              name="State of charge (%)"
+              type="linear"
+              stroke="#1d2333"
+              strokeWidth={1.5}
+              fill="#e3c9b3"
+              fillOpacity={0.6}
+              dot={false}
+              isAnimationActive={false}
+            />
             <Scatter data={unmet} dataKey="marker" name="Day with unmet load" fill="#a12b2b" shape="triangle" legendType="triangle" isAnimationActive={false} />
           </ComposedChart>
         </ResponsiveContainer>
       </div>
       <figcaption className="mt-2 text-sm text-ink-soft" data-testid="soc-chart-caption">
-        {summary} State of charge at the end of each day, from a simulated year of daily weather (seed {formatNumber(simulation.seed, 0, false)}); ▲ marks a
-        day with unmet load.
+        {summary} State of charge at the end of each day, from a simulated year of daily weather (seed {formatNumber(simulation.seed, 0, false)}); ▲ marks a day
+        with unmet load.
       </figcaption>
     </figure>
   );

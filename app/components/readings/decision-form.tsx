@@ -29,12 +29,24 @@ export function DecisionForm({ readingId, action, allowed }: { readingId: string
       </div>
       <div className="flex flex-wrap gap-2">
         {allowed.includes("approved") ? (
-          <button type="submit" name="decision" value="approved" disabled={busy} className="rounded-md bg-copper px-3 py-1.5 text-sm font-medium text-sheet hover:bg-copper-dark disabled:opacity-60">
+          <button
+            type="submit"
+            name="decision"
+            value="approved"
+            disabled={busy}
+            className="rounded-md bg-copper px-3 py-1.5 text-sm font-medium text-sheet hover:bg-copper-dark disabled:opacity-60"
+          >
             <span aria-hidden="true">✓ </span>Approve
           </button>
         ) : null}
         {allowed.includes("rejected") ? (
-          <button type="submit" name="decision" value="rejected" disabled={busy} className="rounded-md border border-fail px-3 py-1.5 text-sm font-medium text-fail hover:bg-fail-wash disabled:opacity-60">
+          <button
+            type="submit"
+            name="decision"
+            value="rejected"
+            disabled={busy}
+            className="rounded-md border border-fail px-3 py-1.5 text-sm font-medium text-fail hover:bg-fail-wash disabled:opacity-60"
+          >
             <span aria-hidden="true">✕ </span>Reject
           </button>
         ) : null}

@@ -9,12 +9,21 @@ export interface DecisionEntry {
   curatorName: string | null;
 }
 
-export function DecisionTimeline({ decisions, submittedAt, submitterName }: { decisions: DecisionEntry[]; submittedAt: Date | string; submitterName: string | null }) {
+export function DecisionTimeline({
+  decisions,
+  submittedAt,
+  submitterName,
+}: {
+  decisions: DecisionEntry[];
+  submittedAt: Date | string;
+  submitterName: string | null;
+}) {
   return (
     <ol className="space-y-3 border-l-2 border-rule pl-4 text-sm" aria-label="Decisions">
       <li>
         <p className="text-ink-soft">
-          <span className="figures">{new Date(submittedAt).toISOString().slice(0, 16).replace("T", " ")} UTC</span> — submitted by {submitterName ?? "a former user"}
+          <span className="figures">{new Date(submittedAt).toISOString().slice(0, 16).replace("T", " ")} UTC</span> — submitted by{" "}
+          {submitterName ?? "a former user"}
         </p>
       </li>
       {decisions.map((d) => (

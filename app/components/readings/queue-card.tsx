@@ -98,7 +98,8 @@ export function QueueCard({ reading: r }: { reading: QueueReading }) {
             <div>
               <dt className="text-xs text-ink-faint">Cell temperature</dt>
               <dd className="figures">
-                {r.cellTempC.toFixed(1)} °C <span className="block font-sans text-xs text-ink-soft">{r.moduleTempC === null ? "estimated from air" : "from back sheet"}</span>
+                {r.cellTempC.toFixed(1)} °C{" "}
+                <span className="block font-sans text-xs text-ink-soft">{r.moduleTempC === null ? "estimated from air" : "from back sheet"}</span>
               </dd>
             </div>
           </dl>
@@ -113,7 +114,12 @@ export function QueueCard({ reading: r }: { reading: QueueReading }) {
         <div className="space-y-3">
           {r.photoId ? (
             <a href={`/files/${r.photoId}`} target="_blank" rel="noreferrer" className="block">
-              <img src={`/files/${r.photoId}`} alt={`Evidence photo: ${r.maker} ${r.model}`} loading="lazy" className="max-h-48 w-full rounded-md border border-rule object-cover" />
+              <img
+                src={`/files/${r.photoId}`}
+                alt={`Evidence photo: ${r.maker} ${r.model}`}
+                loading="lazy"
+                className="max-h-48 w-full rounded-md border border-rule object-cover"
+              />
             </a>
           ) : (
             <p className="text-sm text-ink-faint">No photo.</p>

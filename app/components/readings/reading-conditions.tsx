@@ -32,10 +32,15 @@ const fixed = (value: number | null, digits: number, unit: string) => (value ===
 export function ReadingConditions({ reading: r }: { reading: ConditionsView }) {
   return (
     <dl>
-      <Row label="Measured as">{r.kind === "sweep" ? `a load sweep of ${r.sweep?.length ?? 0} points${r.sweepDurationS !== null ? ` over ${r.sweepDurationS.toFixed(2)} s` : ""}` : "one reading"}</Row>
+      <Row label="Measured as">
+        {r.kind === "sweep"
+          ? `a load sweep of ${r.sweep?.length ?? 0} points${r.sweepDurationS !== null ? ` over ${r.sweepDurationS.toFixed(2)} s` : ""}`
+          : "one reading"}
+      </Row>
       {r.kind === "sweep" ? (
         <Row label="From the sweep">
-          Vmp {fixed(r.vmpV, 2, "V")} · Imp {fixed(r.impA, 2, "A")} · Voc {fixed(r.vocV, 2, "V")} · Isc {fixed(r.iscA, 2, "A")} · FF {r.fillFactor?.toFixed(3) ?? "—"}
+          Vmp {fixed(r.vmpV, 2, "V")} · Imp {fixed(r.impA, 2, "A")} · Voc {fixed(r.vocV, 2, "V")} · Isc {fixed(r.iscA, 2, "A")} · FF{" "}
+          {r.fillFactor?.toFixed(3) ?? "—"}
         </Row>
       ) : r.vmpV !== null ? (
         <Row label="Operating point">

@@ -64,8 +64,8 @@ export function ReadingResult(props: ReadingResultProps) {
             ))}
           </ul>
           <p className="mt-2 text-xs text-ink-faint">
-            Independent terms combined in quadrature. STC value by P·(1000/G)/(1 + γ(Tc − 25)) with the datasheet's power coefficient γ. Typical instrument accuracies:
-            common practice, not a standard's figures.
+            Independent terms combined in quadrature. STC value by P·(1000/G)/(1 + γ(Tc − 25)) with the datasheet's power coefficient γ. Typical instrument
+            accuracies: common practice, not a standard's figures.
           </p>
         </details>
       ) : null}

@@ -47,7 +47,11 @@ const columns = column.columns([
       </span>
     ),
   }),
-  column.accessor((row) => row.stcPmaxW / row.nameplatePmaxW, { id: "ratio", header: "Of nameplate", cell: (info) => <span className="figures">{pct(info.getValue())}</span> }),
+  column.accessor((row) => row.stcPmaxW / row.nameplatePmaxW, {
+    id: "ratio",
+    header: "Of nameplate",
+    cell: (info) => <span className="figures">{pct(info.getValue())}</span>,
+  }),
   column.accessor("flagCount", { header: "Flags", cell: (info) => (info.getValue() ? `⚑ ${info.getValue()}` : "none") }),
   column.accessor("status", { header: "Status", cell: (info) => <StatusBadge status={info.getValue()} /> }),
   column.accessor("submitterName", { header: "Submitted by", cell: (info) => info.getValue() ?? "—" }),

@@ -12,7 +12,10 @@ export interface SweepChartProps {
 const AXIS_TICK = { fill: "#4a5062", fontSize: 11 };
 
 export function SweepChart({ points, mpp, height = 260, compact = false }: SweepChartProps) {
-  const rows = thinPoints([...points].sort((a, b) => a.voltageV - b.voltageV), compact ? 150 : 600).map((p) => ({
+  const rows = thinPoints(
+    [...points].sort((a, b) => a.voltageV - b.voltageV),
+    compact ? 150 : 600,
+  ).map((p) => ({
     voltageV: Number(p.voltageV.toFixed(3)),
     currentA: Number(p.currentA.toFixed(4)),
     powerW: Number((p.voltageV * p.currentA).toFixed(2)),
@@ -38,12 +41,34 @@ export function SweepChart({ points, mpp, height = 260, compact = false }: Sweep
             tick={AXIS_TICK}
             label={compact ? undefined : { value: "Voltage (V)", position: "insideBottom", offset: -8, fill: "#4a5062", fontSize: 11 }}
           />
-          <YAxis yAxisId="current" domain={[0, currentTicks[currentTicks.length - 1]]} ticks={currentTicks} tick={AXIS_TICK} label={compact ? undefined : { value: "Current (A)", angle: -90, position: "insideLeft", fill: "#4a5062", fontSize: 11 }} />
-          <YAxis yAxisId="power" orientation="right" domain={[0, powerTicks[powerTicks.length - 1]]} ticks={powerTicks} tick={AXIS_TICK} label={compact ? undefined : { value: "Power (W)", angle: 90, position: "insideRight", fill: "#4a5062", fontSize: 11 }} />
+          <YAxis
+            yAxisId="current"
+            domain={[0, currentTicks[currentTicks.length - 1]]}
+            ticks={currentTicks}
+            tick={AXIS_TICK}
+            label={compact ? undefined : { value: "Current (A)", angle: -90, position: "insideLeft", fill: "#4a5062", fontSize: 11 }}
+          />
+          <YAxis
+            yAxisId="power"
+            orientation="right"
+            domain={[0, powerTicks[powerTicks.length - 1]]}
+            ticks={powerTicks}
+            tick={AXIS_TICK}
+            label={compact ? undefined : { value: "Power (W)", angle: 90, position: "insideRight", fill: "#4a5062", fontSize: 11 }}
+          />
           {compact ? null : <Tooltip formatter={(value, name) => [value, name]} labelFormatter={(v) => `${v} V`} />}
           {compact ? null : <Legend verticalAlign="top" height={24} />}
           <Line yAxisId="current" dataKey="currentA" name="Current (A)" stroke="#1d2333" strokeWidth={2} dot={false} isAnimationActive={false} />
-          <Line yAxisId="power" dataKey="powerW" name="Power (W)" stroke="#a4532a" strokeWidth={2} strokeDasharray="5 3" dot={false} isAnimationActive={false} />
+          <Line
+            yAxisId="power"
+            dataKey="powerW"
+            name="Power (W)"
+            stroke="#a4532a"
+            strokeWidth={2}
+            strokeDasharray="5 3"
+            dot={false}
+            isAnimationActive={false}
+          />
           {mpp ? <ReferenceDot yAxisId="power" x={Number(mpp.vmpV.toFixed(3))} y={Number(mpp.pmaxW.toFixed(2))} r={5} fill="#a4532a" stroke="#fffcf6" /> : null}
         </ComposedChart>
       </ResponsiveContainer>

@@ -12,7 +12,10 @@ export interface PastedMonth {
 
 /** Twelve numbers separated by spaces, commas, semicolons or new lines. */
 export function parseTwelveNumbers(text: string): number[] | string {
-  const parts = text.trim().split(/[\s,;]+/).filter(Boolean);
+  const parts = text
+    .trim()
+    .split(/[\s,;]+/)
+    .filter(Boolean);
   if (parts.length !== 12) return `Found ${parts.length} values; paste exactly 12, January to December.`;
   const values = parts.map((p) => Number(p));
   const bad = values.findIndex((v) => !Number.isFinite(v));
@@ -40,7 +43,13 @@ export function MonthlyPaste({ onValues }: { onValues: (months: PastedMonth[]) =
       <label htmlFor="paste-ghi" className="mt-2 block">
         Twelve horizontal irradiation values, kWh/m² per day, January first:
       </label>
-      <textarea id="paste-ghi" rows={2} value={text} onChange={(e) => setText(e.target.value)} className="mt-1 w-full rounded border border-rule bg-sheet p-2 font-mono text-xs" />
+      <textarea
+        id="paste-ghi"
+        rows={2}
+        value={text}
+        onChange={(e) => setText(e.target.value)}
+        className="mt-1 w-full rounded border border-rule bg-sheet p-2 font-mono text-xs"
+      />
       <button
         type="button"
         className="mt-1 rounded border border-rule px-3 py-1"
@@ -71,7 +80,11 @@ export function MonthlyPaste({ onValues }: { onValues: (months: PastedMonth[]) =
           onValues(parsed);
         }}
       />
-      {message ? <p className="mt-2 text-ink-soft" role="status">{message}</p> : null}
+      {message ? (
+        <p className="mt-2 text-ink-soft" role="status">
+          {message}
+        </p>
+      ) : null}
     </details>
   );
 }

@@ -34,7 +34,12 @@ export function SiteClimateTable({ months, measured }: { months: FieldMetadata<M
               <td className="py-1 pr-2 font-medium">{name}</td>
               {measured ? (
                 <td className="px-1 py-0.5">
-                  <input {...getInputProps(f.ghiKWhM2Day, { type: "text" })} inputMode="decimal" aria-label={`${name} horizontal irradiation, kWh/m² per day`} className={cell} />
+                  <input
+                    {...getInputProps(f.ghiKWhM2Day, { type: "text" })}
+                    inputMode="decimal"
+                    aria-label={`${name} horizontal irradiation, kWh/m² per day`}
+                    className={cell}
+                  />
                   <FieldError errors={f.ghiKWhM2Day.errors} />
                 </td>
               ) : null}

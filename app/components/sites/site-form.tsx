@@ -10,12 +10,21 @@ import { SiteClimateTable } from "./site-climate-table";
 
 function tiltHint(latitude: unknown) {
   const lat = Number(latitude);
-  if (latitude === "" || latitude === undefined || !Number.isFinite(lat)) return "Equator-facing: south (180°) in the northern hemisphere, north (0°) in the southern.";
+  if (latitude === "" || latitude === undefined || !Number.isFinite(lat))
+    return "Equator-facing: south (180°) in the northern hemisphere, north (0°) in the southern.";
   // Common practice, no source: tilt ≈ latitude balances the year; ≈ latitude + 10–15° favours winter.
   return `Equator-facing is ${lat >= 0 ? "south (180°)" : "north (0°)"}. Tilt ≈ ${Math.round(Math.abs(lat))}° balances the year; ≈ ${Math.min(90, Math.round(Math.abs(lat) + 12))}° favours the dark months.`;
 }
 
-export function SiteFormView({ defaultValue, lastResult, submitLabel }: { defaultValue: Partial<SiteForm> & { months: SiteForm["months"] }; lastResult?: SubmissionResult<string[]> | null; submitLabel: string }) {
+export function SiteFormView({
+  defaultValue,
+  lastResult,
+  submitLabel,
+}: {
+  defaultValue: Partial<SiteForm> & { months: SiteForm["months"] };
+  lastResult?: SubmissionResult<string[]> | null;
+  submitLabel: string;
+}) {
   const navigation = useNavigation();
   const [form, fields] = useForm({
     lastResult,
@@ -102,7 +111,12 @@ export function SiteFormView({ defaultValue, lastResult, submitLabel }: { defaul
         <FieldError errors={fields.months.errors} />
       </Panel>
       <Panel title="Notes">
-        <textarea {...getInputProps(fields.notes, { type: "text" })} rows={3} className="w-full rounded-md border border-rule bg-sheet p-2" aria-label="Notes" />
+        <textarea
+          {...getInputProps(fields.notes, { type: "text" })}
+          rows={3}
+          className="w-full rounded-md border border-rule bg-sheet p-2"
+          aria-label="Notes"
+        />
       </Panel>
       <SubmitButton pending={navigation.state === "submitting"}>{submitLabel}</SubmitButton>
     </Form>

@@ -1,7 +1,16 @@
 // A comparison table (TanStack Table v9) sorted in the browser: every row is loaded, so a click on a
 // header re-sorts at once. The chosen sort is kept in the page's URL by the caller. Money columns
 // sort as decimals; rows missing a figure (no readings, no rate) stay last in either direction.
-import { createSortedRowModel, rowSortingFeature, sortFn_basic, sortFn_text, tableFeatures, useTable, type ColumnDef, type SortingState } from "@tanstack/react-table";
+import {
+  createSortedRowModel,
+  rowSortingFeature,
+  sortFn_basic,
+  sortFn_text,
+  tableFeatures,
+  useTable,
+  type ColumnDef,
+  type SortingState,
+} from "@tanstack/react-table";
 import { compareAmounts } from "~/domain/sourcing/ranking";
 import type { MoneyText } from "~/domain/sourcing/comparison-rows";
 
@@ -71,7 +80,11 @@ export function CompareTable<T extends { offerId: string } & Record<string, any>
                     className={`px-2 py-2 align-bottom font-medium ${numeric ? "text-right" : ""}`}
                   >
                     {header.column.getCanSort() ? (
-                      <button type="button" onClick={header.column.getToggleSortingHandler()} className={`inline-flex items-center gap-1 uppercase hover:text-ink ${sorted ? "text-ink" : ""}`}>
+                      <button
+                        type="button"
+                        onClick={header.column.getToggleSortingHandler()}
+                        className={`inline-flex items-center gap-1 uppercase hover:text-ink ${sorted ? "text-ink" : ""}`}
+                      >
                         <table.FlexRender header={header} />
                         <span aria-hidden="true" className="w-3 text-copper">
                           {sorted === "asc" ? "↑" : sorted === "desc" ? "↓" : "↕"}
@@ -89,7 +102,13 @@ export function CompareTable<T extends { offerId: string } & Record<string, any>
         </thead>
         <tbody className="divide-y divide-rule">
           {table.getRowModel().rows.map((row) => (
-            <tr key={row.id} className="hover:bg-paper/60" data-offer-id={row.original.offerId} data-model={`${row.original.maker} ${row.original.model}`} data-supplier={row.original.supplierName}>
+            <tr
+              key={row.id}
+              className="hover:bg-paper/60"
+              data-offer-id={row.original.offerId}
+              data-model={`${row.original.maker} ${row.original.model}`}
+              data-supplier={row.original.supplierName}
+            >
               {row.getAllCells().map((cell) => (
                 <td key={cell.id} className={`px-2 py-2 align-top ${numericColumns.has(cell.column.id) ? "text-right" : ""}`}>
                   <table.FlexRender cell={cell} />

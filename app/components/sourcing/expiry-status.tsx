@@ -2,7 +2,10 @@
 export function ExpiryStatus({ validUntil, expired }: { validUntil: string | null; expired: boolean }) {
   if (expired) {
     return (
-      <span className="inline-flex items-center gap-1 whitespace-nowrap rounded bg-warn-wash px-1.5 py-0.5 text-xs font-medium text-warn" data-testid="expired-flag">
+      <span
+        className="inline-flex items-center gap-1 whitespace-nowrap rounded bg-warn-wash px-1.5 py-0.5 text-xs font-medium text-warn"
+        data-testid="expired-flag"
+      >
         <span aria-hidden="true">⚠</span> Expired {validUntil}
       </span>
     );

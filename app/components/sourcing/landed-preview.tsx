@@ -47,7 +47,9 @@ export function LandedPreview({ rows, quotingCurrency, asOf }: { rows: LandedPre
           ))}
         </tbody>
       </table>
-      <p className="mt-2 text-xs text-ink-faint">Each line rounded once to the currency's smallest unit; a need below the minimum order is raised to it. Rates as on {asOf}.</p>
+      <p className="mt-2 text-xs text-ink-faint">
+        Each line rounded once to the currency's smallest unit; a need below the minimum order is raised to it. Rates as on {asOf}.
+      </p>
     </div>
   );
 }

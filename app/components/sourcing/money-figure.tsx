@@ -23,7 +23,21 @@ export function RateNote({ rate }: { rate: RateText | null }) {
   return <span className="ml-auto block max-w-40 text-xs text-ink-faint">at {formatRate(rate)}</span>;
 }
 
-export function MoneyFigure({ value, extraDigits = 0, unit, original, rate, testId }: { value: MoneyText | null; extraDigits?: number; unit?: string; original?: MoneyText; rate?: RateText | null; testId?: string }) {
+export function MoneyFigure({
+  value,
+  extraDigits = 0,
+  unit,
+  original,
+  rate,
+  testId,
+}: {
+  value: MoneyText | null;
+  extraDigits?: number;
+  unit?: string;
+  original?: MoneyText;
+  rate?: RateText | null;
+  testId?: string;
+}) {
   if (!value) return <span className="text-xs text-ink-faint">—</span>;
   return (
     <span className="figures whitespace-nowrap" data-testid={testId} data-amount={value.amount}>

@@ -11,7 +11,17 @@ const HINTS: Partial<Record<NeedParam, string>> = {
   losses: "Temperature, wiring, soiling, controller.",
 };
 
-export function NeedForm({ kind, values, errors, sort }: { kind: OfferPartKind; values: Record<NeedParam, string>; errors: Partial<Record<NeedParam, string>>; sort: { id: string; dir: string } }) {
+export function NeedForm({
+  kind,
+  values,
+  errors,
+  sort,
+}: {
+  kind: OfferPartKind;
+  values: Record<NeedParam, string>;
+  errors: Partial<Record<NeedParam, string>>;
+  sort: { id: string; dir: string };
+}) {
   return (
     <Form method="get" className="flex flex-wrap items-end gap-3" aria-label="What to compare for">
       <input type="hidden" name="sort" value={sort.id} />
@@ -23,7 +33,15 @@ export function NeedForm({ kind, values, errors, sort }: { kind: OfferPartKind; 
             <label htmlFor={`need-${param}`} className="mb-1 block text-sm font-medium">
               {label}
             </label>
-            <input id={`need-${param}`} name={param} defaultValue={values[param]} inputMode="decimal" aria-invalid={errors[param] ? true : undefined} aria-describedby={errors[param] ? `need-${param}-error` : undefined} className={inputClass} />
+            <input
+              id={`need-${param}`}
+              name={param}
+              defaultValue={values[param]}
+              inputMode="decimal"
+              aria-invalid={errors[param] ? true : undefined}
+              aria-describedby={errors[param] ? `need-${param}-error` : undefined}
+              className={inputClass}
+            />
             {kind === "modules" && HINTS[param] ? <p className="mt-1 text-xs text-ink-faint">{HINTS[param]}</p> : null}
             <FieldError id={`need-${param}-error`} errors={errors[param] ? [errors[param]!] : undefined} />
           </div>

@@ -11,11 +11,28 @@ import { offerFormSchema, type OfferForm } from "~/lib/sourcing-forms";
 const KIND_LABELS: Record<OfferPartKind, string> = { modules: "Module", batteries: "Battery", controllers: "Charge controller", inverters: "Inverter" };
 
 export interface OfferFormChoices {
-  suppliers: { id: string; name: string; currency: string; defaultShippingPerUnit: string; defaultShippingPerOrder: string; defaultLeadTimeDays: number | null }[];
+  suppliers: {
+    id: string;
+    name: string;
+    currency: string;
+    defaultShippingPerUnit: string;
+    defaultShippingPerOrder: string;
+    defaultLeadTimeDays: number | null;
+  }[];
   parts: Record<OfferPartKind, { id: string; maker: string; model: string }[]>;
 }
 
-export function OfferFormView({ defaultValue, lastResult, submitLabel, choices }: { defaultValue?: Partial<OfferForm>; lastResult?: SubmissionResult<string[]> | null; submitLabel: string; choices: OfferFormChoices }) {
+export function OfferFormView({
+  defaultValue,
+  lastResult,
+  submitLabel,
+  choices,
+}: {
+  defaultValue?: Partial<OfferForm>;
+  lastResult?: SubmissionResult<string[]> | null;
+  submitLabel: string;
+  choices: OfferFormChoices;
+}) {
   const navigation = useNavigation();
   const [form, fields] = useForm({
     lastResult,
@@ -82,7 +99,11 @@ export function OfferFormView({ defaultValue, lastResult, submitLabel, choices }
           <div className="space-y-3">
             <div className="grid grid-cols-2 gap-3">
               <TextField field={fields.unitPrice} label="Unit price" hint="Decimal point, no currency sign, e.g. 58.50." />
-              <TextField field={fields.currency} label="Currency (blank = supplier's)" hint={supplier ? `${supplier.name} quotes in ${supplier.currency}.` : undefined} />
+              <TextField
+                field={fields.currency}
+                label="Currency (blank = supplier's)"
+                hint={supplier ? `${supplier.name} quotes in ${supplier.currency}.` : undefined}
+              />
             </div>
             <fieldset>
               <legend className="mb-1 text-sm font-medium">Price breaks by quantity (optional)</legend>
@@ -106,14 +127,20 @@ export function OfferFormView({ defaultValue, lastResult, submitLabel, choices }
                         <input {...getInputProps(row.unitPrice, { type: "text" })} className={inputClass} />
                         <FieldError errors={row.unitPrice.errors} />
                       </div>
-                      <button {...form.remove.getButtonProps({ name: fields.priceBreaks.name, index: i })} className="mt-5 rounded border border-rule px-2 py-1 text-sm text-ink-soft">
+                      <button
+                        {...form.remove.getButtonProps({ name: fields.priceBreaks.name, index: i })}
+                        className="mt-5 rounded border border-rule px-2 py-1 text-sm text-ink-soft"
+                      >
                         Remove
                       </button>
                     </li>
                   );
                 })}
               </ul>
-              <button {...form.insert.getButtonProps({ name: fields.priceBreaks.name })} className="mt-2 rounded border border-copper px-2 py-1 text-sm text-copper">
+              <button
+                {...form.insert.getButtonProps({ name: fields.priceBreaks.name })}
+                className="mt-2 rounded border border-copper px-2 py-1 text-sm text-copper"
+              >
                 Add a price break
               </button>
               <FieldError errors={fields.priceBreaks.errors} />
@@ -123,11 +150,27 @@ export function OfferFormView({ defaultValue, lastResult, submitLabel, choices }
         <Panel title="Order and delivery">
           <div className="grid grid-cols-2 gap-3">
             <TextField field={fields.minimumOrder} label="Minimum order (units)" hint="Blank = 1." />
-            <TextField field={fields.leadTimeDays} label="Lead time (days)" hint={supplier?.defaultLeadTimeDays != null ? `Blank = the supplier's ${supplier.defaultLeadTimeDays} d.` : undefined} />
-            <TextField field={fields.shippingPerUnit} label="Shipping per unit" hint={supplier ? `Blank = the supplier's ${supplier.defaultShippingPerUnit} ${supplier.currency}.` : "Blank = the supplier's default."} />
-            <TextField field={fields.shippingPerOrder} label="Shipping per order" hint={supplier ? `Blank = the supplier's ${supplier.defaultShippingPerOrder} ${supplier.currency}.` : "Blank = the supplier's default."} />
+            <TextField
+              field={fields.leadTimeDays}
+              label="Lead time (days)"
+              hint={supplier?.defaultLeadTimeDays != null ? `Blank = the supplier's ${supplier.defaultLeadTimeDays} d.` : undefined}
+            />
+            <TextField
+              field={fields.shippingPerUnit}
+              label="Shipping per unit"
+              hint={supplier ? `Blank = the supplier's ${supplier.defaultShippingPerUnit} ${supplier.currency}.` : "Blank = the supplier's default."}
+            />
+            <TextField
+              field={fields.shippingPerOrder}
+              label="Shipping per order"
+              hint={supplier ? `Blank = the supplier's ${supplier.defaultShippingPerOrder} ${supplier.currency}.` : "Blank = the supplier's default."}
+            />
             <TextField field={fields.stock} label="In stock (units, optional)" />
-            <TextField field={fields.validUntil} label="Valid until (YYYY-MM-DD, optional)" hint="The last day the price holds. Expired offers are kept, flagged, and left out of comparisons." />
+            <TextField
+              field={fields.validUntil}
+              label="Valid until (YYYY-MM-DD, optional)"
+              hint="The last day the price holds. Expired offers are kept, flagged, and left out of comparisons."
+            />
           </div>
         </Panel>
         <Panel title="Notes">

@@ -13,15 +13,35 @@ export function OfferList({ offers, showSupplier = true }: { offers: OfferJson[]
       <table className="figures w-full text-left text-sm" data-testid="offer-list">
         <thead className="border-b-2 border-ink/70 text-xs uppercase tracking-wide text-ink-soft">
           <tr>
-            <th scope="col" className="px-2 py-2 font-medium">Part</th>
-            {showSupplier ? <th scope="col" className="px-2 py-2 font-medium">Supplier</th> : null}
-            <th scope="col" className="px-2 py-2 text-right font-medium">Unit price</th>
-            <th scope="col" className="px-2 py-2 font-medium">Breaks</th>
-            <th scope="col" className="px-2 py-2 text-right font-medium">Min. order</th>
-            <th scope="col" className="px-2 py-2 text-right font-medium">Shipping</th>
-            <th scope="col" className="px-2 py-2 text-right font-medium">Lead time</th>
-            <th scope="col" className="px-2 py-2 text-right font-medium">Stock</th>
-            <th scope="col" className="px-2 py-2 font-medium">Validity</th>
+            <th scope="col" className="px-2 py-2 font-medium">
+              Part
+            </th>
+            {showSupplier ? (
+              <th scope="col" className="px-2 py-2 font-medium">
+                Supplier
+              </th>
+            ) : null}
+            <th scope="col" className="px-2 py-2 text-right font-medium">
+              Unit price
+            </th>
+            <th scope="col" className="px-2 py-2 font-medium">
+              Breaks
+            </th>
+            <th scope="col" className="px-2 py-2 text-right font-medium">
+              Min. order
+            </th>
+            <th scope="col" className="px-2 py-2 text-right font-medium">
+              Shipping
+            </th>
+            <th scope="col" className="px-2 py-2 text-right font-medium">
+              Lead time
+            </th>
+            <th scope="col" className="px-2 py-2 text-right font-medium">
+              Stock
+            </th>
+            <th scope="col" className="px-2 py-2 font-medium">
+              Validity
+            </th>
           </tr>
         </thead>
         <tbody className="divide-y divide-rule">
@@ -45,7 +65,9 @@ export function OfferList({ offers, showSupplier = true }: { offers: OfferJson[]
               ) : null}
               <td className="px-2 py-2 text-right whitespace-nowrap">{formatAmount({ amount: o.unitPrice, currency: o.currency })}</td>
               <td className="px-2 py-2 text-xs text-ink-soft">
-                {o.priceBreaks.length ? o.priceBreaks.map((b) => `from ${b.minQuantity}: ${formatAmount({ amount: b.unitPrice, currency: o.currency })}`).join(" · ") : "—"}
+                {o.priceBreaks.length
+                  ? o.priceBreaks.map((b) => `from ${b.minQuantity}: ${formatAmount({ amount: b.unitPrice, currency: o.currency })}`).join(" · ")
+                  : "—"}
               </td>
               <td className="px-2 py-2 text-right">{o.minimumOrder}</td>
               <td className="px-2 py-2 text-right text-xs whitespace-nowrap">

@@ -13,7 +13,9 @@ function Headroom({ pct, rating, need, unit, decimals = 0 }: { pct: number | nul
   return (
     <span className={`block whitespace-nowrap text-xs ${short ? "text-fail" : "text-pass"}`}>
       <span aria-hidden="true">{short ? "✕" : "✓"}</span>{" "}
-      {short ? `${num(need - rating, decimals)} ${unit} short of ${num(need, decimals)} ${unit}` : `${num(pct, 0)} % headroom over ${num(need, decimals)} ${unit}`}
+      {short
+        ? `${num(need - rating, decimals)} ${unit} short of ${num(need, decimals)} ${unit}`
+        : `${num(pct, 0)} % headroom over ${num(need, decimals)} ${unit}`}
     </span>
   );
 }
@@ -51,7 +53,13 @@ export function batteryCompareColumns(): CompareColumns<BatteryComparisonRow> {
       ),
     }),
     b.accessor("cycleLife", { header: "Cycle life", sortFn: "basic", cell: (info) => <Unit value={info.getValue()} unit="cycles" /> }),
-    b.accessor((r) => moneyValue(r.pricePerUsableKWh), { id: "perUsableKWh", header: "Price per usable kWh", sortFn: "money", sortUndefined: "last", cell: (info) => <MoneyFigure value={info.row.original.pricePerUsableKWh} unit="/ kWh" /> }),
+    b.accessor((r) => moneyValue(r.pricePerUsableKWh), {
+      id: "perUsableKWh",
+      header: "Price per usable kWh",
+      sortFn: "money",
+      sortUndefined: "last",
+      cell: (info) => <MoneyFigure value={info.row.original.pricePerUsableKWh} unit="/ kWh" />,
+    }),
     b.accessor((r) => moneyValue(r.pricePerCycleKWh), {
       id: "perCycleKWh",
       header: "Price per cycled kWh",
@@ -80,7 +88,12 @@ export function controllerCompareColumns(bankV: number, arrayW: number): Compare
       sortUndefined: "last",
       cell: (info) => {
         const r = info.row.original;
-        if (!r.supportsVoltage) return <span className="text-xs text-fail"><span aria-hidden="true">✕</span> does not charge a {bankV} V bank</span>;
+        if (!r.supportsVoltage)
+          return (
+            <span className="text-xs text-fail">
+              <span aria-hidden="true">✕</span> does not charge a {bankV} V bank
+            </span>
+          );
         return (
           <span className="block">
             <Unit value={r.ratedPvPowerW} unit="W" />
@@ -136,9 +149,13 @@ export function inverterCompareColumns(bankV: number, peakW: number): CompareCol
       sortFn: "basic",
       cell: (info) =>
         info.row.original.voltageMatches ? (
-          <span className="whitespace-nowrap text-pass"><span aria-hidden="true">✓</span> {info.getValue()} V</span>
+          <span className="whitespace-nowrap text-pass">
+            <span aria-hidden="true">✓</span> {info.getValue()} V
+          </span>
         ) : (
-          <span className="whitespace-nowrap text-fail"><span aria-hidden="true">✕</span> {info.getValue()} V, bank is {bankV} V</span>
+          <span className="whitespace-nowrap text-fail">
+            <span aria-hidden="true">✕</span> {info.getValue()} V, bank is {bankV} V
+          </span>
         ),
     }),
     i.accessor("efficiencyPct", {
@@ -152,7 +169,13 @@ export function inverterCompareColumns(bankV: number, peakW: number): CompareCol
         </span>
       ),
     }),
-    i.accessor((r) => moneyValue(r.pricePerKW), { id: "perKW", header: "Price per continuous kW", sortFn: "money", sortUndefined: "last", cell: (info) => <MoneyFigure value={info.row.original.pricePerKW} unit="/ kW" /> }),
+    i.accessor((r) => moneyValue(r.pricePerKW), {
+      id: "perKW",
+      header: "Price per continuous kW",
+      sortFn: "money",
+      sortUndefined: "last",
+      cell: (info) => <MoneyFigure value={info.row.original.pricePerKW} unit="/ kW" />,
+    }),
     shared.unitPrice,
     shared.landed,
     shared.delivery,

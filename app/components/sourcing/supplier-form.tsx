@@ -6,7 +6,15 @@ import { FieldError, FormErrors, SubmitButton, TextField } from "~/components/fo
 import { Panel } from "~/components/page-header";
 import { supplierFormSchema, type SupplierForm } from "~/lib/sourcing-forms";
 
-export function SupplierFormView({ defaultValue, lastResult, submitLabel }: { defaultValue?: Partial<SupplierForm>; lastResult?: SubmissionResult<string[]> | null; submitLabel: string }) {
+export function SupplierFormView({
+  defaultValue,
+  lastResult,
+  submitLabel,
+}: {
+  defaultValue?: Partial<SupplierForm>;
+  lastResult?: SubmissionResult<string[]> | null;
+  submitLabel: string;
+}) {
   const navigation = useNavigation();
   const [form, fields] = useForm({
     lastResult,

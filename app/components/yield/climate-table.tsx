@@ -33,19 +33,57 @@ export function ClimateTable({
               <td className="py-1 pr-2 font-medium">{name}</td>
               <td className="px-1 py-0.5">
                 {measured ? (
-                  <NumberInput compact id={`ghi-${i}`} label={`${name} horizontal irradiation`} unit="kWh/m²/day" value={m.ghi} onChange={(v) => onMonth(i, { ghi: v })} error={errors[`${path}.ghiKWhM2Day`] ?? errors[path]} />
+                  <NumberInput
+                    compact
+                    id={`ghi-${i}`}
+                    label={`${name} horizontal irradiation`}
+                    unit="kWh/m²/day"
+                    value={m.ghi}
+                    onChange={(v) => onMonth(i, { ghi: v })}
+                    error={errors[`${path}.ghiKWhM2Day`] ?? errors[path]}
+                  />
                 ) : (
-                  <NumberInput compact id={`kt-${i}`} label={`${name} clearness index`} value={m.kt} onChange={(v) => onMonth(i, { kt: v })} error={errors[`${path}.clearnessIndex`] ?? errors[path]} />
+                  <NumberInput
+                    compact
+                    id={`kt-${i}`}
+                    label={`${name} clearness index`}
+                    value={m.kt}
+                    onChange={(v) => onMonth(i, { kt: v })}
+                    error={errors[`${path}.clearnessIndex`] ?? errors[path]}
+                  />
                 )}
               </td>
               <td className="px-1 py-0.5">
-                <NumberInput compact id={`tmax-${i}`} label={`${name} mean daily maximum`} unit="°C" value={m.tMax} onChange={(v) => onMonth(i, { tMax: v })} error={errors[`${path}.tMaxC`]} />
+                <NumberInput
+                  compact
+                  id={`tmax-${i}`}
+                  label={`${name} mean daily maximum`}
+                  unit="°C"
+                  value={m.tMax}
+                  onChange={(v) => onMonth(i, { tMax: v })}
+                  error={errors[`${path}.tMaxC`]}
+                />
               </td>
               <td className="px-1 py-0.5">
-                <NumberInput compact id={`tmin-${i}`} label={`${name} mean daily minimum`} unit="°C" value={m.tMin} onChange={(v) => onMonth(i, { tMin: v })} error={errors[`${path}.tMinC`]} />
+                <NumberInput
+                  compact
+                  id={`tmin-${i}`}
+                  label={`${name} mean daily minimum`}
+                  unit="°C"
+                  value={m.tMin}
+                  onChange={(v) => onMonth(i, { tMin: v })}
+                  error={errors[`${path}.tMinC`]}
+                />
               </td>
               <td className="px-1 py-0.5">
-                <NumberInput compact id={`albedo-${i}`} label={`${name} albedo`} value={m.albedo} onChange={(v) => onMonth(i, { albedo: v })} error={errors[`${path}.albedo`]} />
+                <NumberInput
+                  compact
+                  id={`albedo-${i}`}
+                  label={`${name} albedo`}
+                  value={m.albedo}
+                  onChange={(v) => onMonth(i, { albedo: v })}
+                  error={errors[`${path}.albedo`]}
+                />
               </td>
             </tr>
           );

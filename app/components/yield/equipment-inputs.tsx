@@ -58,7 +58,15 @@ export function EquipmentInputs({
       {state.moduleId === "" ? (
         <div className="grid grid-cols-3 gap-2">
           {CUSTOM_FIELDS.map(({ key, label, unit }) => (
-            <NumberInput key={key} id={`module-${key}`} label={label} unit={unit} value={state.custom[key]} onChange={(v) => update({ custom: { ...state.custom, [key]: v } })} error={errors[`module.${key}`]} />
+            <NumberInput
+              key={key}
+              id={`module-${key}`}
+              label={label}
+              unit={unit}
+              value={state.custom[key]}
+              onChange={(v) => update({ custom: { ...state.custom, [key]: v } })}
+              error={errors[`module.${key}`]}
+            />
           ))}
         </div>
       ) : null}
@@ -67,7 +75,12 @@ export function EquipmentInputs({
           <label htmlFor="controller-kind" className="mb-1 block text-sm font-medium">
             Controller
           </label>
-          <select id="controller-kind" value={state.controllerKind} onChange={(e) => update({ controllerKind: e.target.value as "mppt" | "pwm" })} className={selectClass}>
+          <select
+            id="controller-kind"
+            value={state.controllerKind}
+            onChange={(e) => update({ controllerKind: e.target.value as "mppt" | "pwm" })}
+            className={selectClass}
+          >
             <option value="mppt">MPPT</option>
             <option value="pwm">PWM</option>
           </select>
@@ -82,11 +95,25 @@ export function EquipmentInputs({
             <option value="48">48</option>
           </select>
         </div>
-        <NumberInput id="efficiency" label="Efficiency" unit="%" value={state.efficiencyPct} onChange={(v) => update({ efficiencyPct: v })} error={errors["controller.efficiencyPct"]} />
+        <NumberInput
+          id="efficiency"
+          label="Efficiency"
+          unit="%"
+          value={state.efficiencyPct}
+          onChange={(v) => update({ efficiencyPct: v })}
+          error={errors["controller.efficiencyPct"]}
+        />
       </div>
       <div className="grid grid-cols-3 gap-2">
         <NumberInput id="soiling" label="Soiling" unit="%" value={state.soiling} onChange={(v) => update({ soiling: v })} error={errors["lossesPct.soiling"]} />
-        <NumberInput id="mismatch" label="Mismatch" unit="%" value={state.mismatch} onChange={(v) => update({ mismatch: v })} error={errors["lossesPct.mismatch"]} />
+        <NumberInput
+          id="mismatch"
+          label="Mismatch"
+          unit="%"
+          value={state.mismatch}
+          onChange={(v) => update({ mismatch: v })}
+          error={errors["lossesPct.mismatch"]}
+        />
         <NumberInput id="wiring" label="Wiring" unit="%" value={state.wiring} onChange={(v) => update({ wiring: v })} error={errors["lossesPct.wiring"]} />
       </div>
     </div>

@@ -47,7 +47,9 @@ export function YieldResults({ result }: { result: YieldResult }) {
               <th className="px-2 font-medium">Diffuse share</th>
               <th className="px-2 font-medium">In-plane kWh/m²/d</th>
               <th className="px-2 font-medium">Cell °C (day)</th>
-              <th className="px-2 font-medium" title="Output change from cell temperature against 25 °C">Temp. effect</th>
+              <th className="px-2 font-medium" title="Output change from cell temperature against 25 °C">
+                Temp. effect
+              </th>
               <th className="px-2 font-medium">Controller</th>
               <th className="pl-2 font-medium">Energy Wh/day</th>
             </tr>
@@ -62,7 +64,11 @@ export function YieldResults({ result }: { result: YieldResult }) {
                 <td className="px-2">{f(m.h0KWhM2Day, 2)}</td>
                 <td className="px-2">
                   {f(m.ghiKWhM2Day, 2)}
-                  {m.irradianceSource === "clearness-index" ? <abbr title={`assumed from clearness index ${m.clearnessIndex.toFixed(2)}`} className="ml-0.5 text-xs text-copper-dark">*</abbr> : null}
+                  {m.irradianceSource === "clearness-index" ? (
+                    <abbr title={`assumed from clearness index ${m.clearnessIndex.toFixed(2)}`} className="ml-0.5 text-xs text-copper-dark">
+                      *
+                    </abbr>
+                  ) : null}
                 </td>
                 <td className="px-2">{f(m.diffuseFraction * 100, 0)} %</td>
                 <td className="px-2">{f(m.poaKWhM2Day, 2)}</td>

@@ -33,11 +33,13 @@ export interface EvaluatedSweep {
 }
 
 export type Evaluation =
-  | { ok: true; takenAtUtc: Date; sweep: EvaluatedSweep | null; reading: NormalisedReading }
-  | { ok: false; field: string; message: string };
+  { ok: true; takenAtUtc: Date; sweep: EvaluatedSweep | null; reading: NormalisedReading } | { ok: false; field: string; message: string };
 
 /** Reads and analyses a sweep; the field for errors is the form's file input. */
-export function evaluateSweep(source: Exclude<SweepSource, null>, typedDurationS?: number): { ok: true; sweep: EvaluatedSweep } | { ok: false; field: string; message: string } {
+export function evaluateSweep(
+  source: Exclude<SweepSource, null>,
+  typedDurationS?: number,
+): { ok: true; sweep: EvaluatedSweep } | { ok: false; field: string; message: string } {
   let points: SweepPoint[];
   let durationS: number | null = typedDurationS ?? null;
   if ("csv" in source) {

@@ -64,12 +64,21 @@ export function readingFlags(input: FlagInput): ReadingFlag[] {
     );
   }
   if (input.irradianceWm2 < LOW_IRRADIANCE_WM2) {
-    add("low-irradiance", `In-plane irradiance was ${round(input.irradianceWm2)} W/m² (under ${LOW_IRRADIANCE_WM2} W/m²); scaling up to 1000 W/m² magnifies every error.`);
+    add(
+      "low-irradiance",
+      `In-plane irradiance was ${round(input.irradianceWm2)} W/m² (under ${LOW_IRRADIANCE_WM2} W/m²); scaling up to 1000 W/m² magnifies every error.`,
+    );
   }
   if (input.incidenceDeg >= 90) {
-    add("sun-behind-module", "The sun was behind the module's plane at that time: only diffuse light reached it. Check the time, UTC offset, tilt and azimuth.");
+    add(
+      "sun-behind-module",
+      "The sun was behind the module's plane at that time: only diffuse light reached it. Check the time, UTC offset, tilt and azimuth.",
+    );
   } else if (input.incidenceDeg > HIGH_INCIDENCE_DEG) {
-    add("high-incidence", `The sun struck the module at ${round(input.incidenceDeg)}° from its normal (over ${HIGH_INCIDENCE_DEG}°): reflection off the glass cuts the power.`);
+    add(
+      "high-incidence",
+      `The sun struck the module at ${round(input.incidenceDeg)}° from its normal (over ${HIGH_INCIDENCE_DEG}°): reflection off the glass cuts the power.`,
+    );
   }
   if (input.irradianceEstimated) {
     add("irradiance-estimated", "Irradiance was not measured: it is a clear-sky estimate for that time, place and orientation, so the reading counts half.");
@@ -82,7 +91,10 @@ export function readingFlags(input: FlagInput): ReadingFlag[] {
   if (input.moduleTempC === null) {
     add("module-temperature-missing", "No back-sheet temperature: the cell temperature is estimated from the air temperature with the NOCT model.");
   } else if (input.irradianceWm2 > 300 && input.moduleTempC < input.airTempC - MODULE_COLDER_THAN_AIR_C) {
-    add("module-colder-than-air", `The back sheet (${round(input.moduleTempC, 1)} °C) read colder than the air (${round(input.airTempC, 1)} °C) in sun: check the thermometer.`);
+    add(
+      "module-colder-than-air",
+      `The back sheet (${round(input.moduleTempC, 1)} °C) read colder than the air (${round(input.airTempC, 1)} °C) in sun: check the thermometer.`,
+    );
   }
   const ratio = input.stcPmaxW / input.nameplatePmaxW;
   if (ratio < PLAUSIBLE_RATIO_MIN || ratio > PLAUSIBLE_RATIO_MAX) {
@@ -94,14 +106,23 @@ export function readingFlags(input: FlagInput): ReadingFlag[] {
     if (sweep.pointCount < SPARSE_SWEEP_POINTS) {
       add("sparse-sweep", `The sweep has ${sweep.pointCount} points (fewer than ${SPARSE_SWEEP_POINTS}): the maximum power point is coarsely located.`);
     } else if (sweep.kneeStepV > COARSE_KNEE_FRACTION_OF_VOC * sweep.vocV) {
-      add("sparse-sweep", `Points near the maximum power point are ${round(sweep.kneeStepV, 2)} V apart (over ${round(100 * COARSE_KNEE_FRACTION_OF_VOC)} % of Voc): the peak is coarsely located.`);
+      add(
+        "sparse-sweep",
+        `Points near the maximum power point are ${round(sweep.kneeStepV, 2)} V apart (over ${round(100 * COARSE_KNEE_FRACTION_OF_VOC)} % of Voc): the peak is coarsely located.`,
+      );
     }
     if (sweep.durationS !== null && sweep.durationS > SLOW_SWEEP_S) {
-      add("slow-sweep", `The sweep took ${round(sweep.durationS, 1)} s (over ${SLOW_SWEEP_S} s): the sun and the module's temperature may have changed during it.`);
+      add(
+        "slow-sweep",
+        `The sweep took ${round(sweep.durationS, 1)} s (over ${SLOW_SWEEP_S} s): the sun and the module's temperature may have changed during it.`,
+      );
     }
     if (sweep.iscExtrapolated || sweep.vocExtrapolated) {
       const ends = [sweep.iscExtrapolated ? "Isc" : null, sweep.vocExtrapolated ? "Voc" : null].filter(Boolean).join(" and ");
-      add("sweep-extrapolated", `${ends} extrapolated: the sweep does not reach ${sweep.iscExtrapolated && sweep.vocExtrapolated ? "either end" : "one end"} of the curve. ${sweep.notes.join(" ")}`.trim());
+      add(
+        "sweep-extrapolated",
+        `${ends} extrapolated: the sweep does not reach ${sweep.iscExtrapolated && sweep.vocExtrapolated ? "either end" : "one end"} of the curve. ${sweep.notes.join(" ")}`.trim(),
+      );
     }
   }
   return flags;

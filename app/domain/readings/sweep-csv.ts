@@ -39,8 +39,7 @@ interface Column {
 }
 
 export type SweepCsvResult =
-  | { ok: true; points: SweepPoint[]; durationS: number | null; units: { voltage: string; current: string } }
-  | { ok: false; message: string };
+  { ok: true; points: SweepPoint[]; durationS: number | null; units: { voltage: string; current: string } } | { ok: false; message: string };
 
 /** "Voltage (mV)" → { quantity: "voltage", unit: "mv" }; null when the header is not recognised. */
 export function readHeader(header: string): { quantity: Quantity; unit: string | null } | null {
@@ -68,7 +67,10 @@ function listRowErrors(errors: string[]): string {
 function findColumns(firstRow: string[]): { columns: Record<Quantity, Column | null>; hasHeader: boolean } | string {
   const numeric = firstRow.length >= 2 && firstRow.slice(0, 2).every((cell) => Number.isFinite(parseNumber(cell, true)));
   if (numeric) {
-    return { hasHeader: false, columns: { voltage: { index: 0, header: "column 1", scale: 1 }, current: { index: 1, header: "column 2", scale: 1 }, time: null } };
+    return {
+      hasHeader: false,
+      columns: { voltage: { index: 0, header: "column 1", scale: 1 }, current: { index: 1, header: "column 2", scale: 1 }, time: null },
+    };
   }
   const columns: Record<Quantity, Column | null> = { voltage: null, current: null, time: null };
   for (const [index, header] of firstRow.entries()) {
@@ -77,7 +79,9 @@ function findColumns(firstRow: string[]): { columns: Record<Quantity, Column | n
     const unit = read.unit ?? DEFAULT_UNIT[read.quantity].toLowerCase();
     const scale = UNITS[read.quantity][unit];
     if (scale === undefined) {
-      const allowed = Object.keys(UNITS[read.quantity]).map((u) => u.replace("v", "V").replace("a", "A")).join(" or ");
+      const allowed = Object.keys(UNITS[read.quantity])
+        .map((u) => u.replace("v", "V").replace("a", "A"))
+        .join(" or ");
       return `Column "${header.trim()}" is in ${unit}; give ${read.quantity} in ${allowed}.`;
     }
     columns[read.quantity] = { index, header: header.trim(), scale };

@@ -37,7 +37,8 @@ export function describeInputChanges(saved: KitPlanInput, current: KitPlanInput)
   if (differs(saved.parts.controller, current.parts.controller)) changes.push("The charge controller's catalogue figures changed.");
   if (differs(saved.parts.battery, current.parts.battery)) changes.push("The battery's catalogue figures changed.");
   if (differs(saved.parts.inverter, current.parts.inverter)) changes.push("The inverter's catalogue figures changed.");
-  if (saved.site.coldestTempC !== current.site.coldestTempC) changes.push(`Coldest expected temperature: ${saved.site.coldestTempC} °C → ${current.site.coldestTempC} °C.`);
+  if (saved.site.coldestTempC !== current.site.coldestTempC)
+    changes.push(`Coldest expected temperature: ${saved.site.coldestTempC} °C → ${current.site.coldestTempC} °C.`);
   const monthChanges = saved.site.months.map((m, i) => (differs(m, current.site.months[i]) ? MONTHS[i] : null)).filter(Boolean);
   if (monthChanges.length) changes.push(`Site climate changed in ${monthChanges.join(", ")}.`);
   const { months: _g, coldestTempC: _h, ...siteRest } = saved.site;
@@ -51,9 +52,12 @@ export function describeResultChanges(saved: KitPlan, current: KitPlan): string[
   const changes: string[] = [];
   const [sl, cl] = [saved.array.layout, current.array.layout];
   if (sl.moduleCount !== cl.moduleCount || sl.modulesInSeries !== cl.modulesInSeries) {
-    changes.push(`Modules: ${sl.modulesInSeries} × ${sl.stringsInParallel} (${sl.moduleCount}) → ${cl.modulesInSeries} × ${cl.stringsInParallel} (${cl.moduleCount}).`);
+    changes.push(
+      `Modules: ${sl.modulesInSeries} × ${sl.stringsInParallel} (${sl.moduleCount}) → ${cl.modulesInSeries} × ${cl.stringsInParallel} (${cl.moduleCount}).`,
+    );
   }
-  if (saved.simulation.unmetDays !== current.simulation.unmetDays) changes.push(`Days with unmet load a year: ${saved.simulation.unmetDays} → ${current.simulation.unmetDays}.`);
+  if (saved.simulation.unmetDays !== current.simulation.unmetDays)
+    changes.push(`Days with unmet load a year: ${saved.simulation.unmetDays} → ${current.simulation.unmetDays}.`);
   const status = (plan: KitPlan) => new Map(plan.checks.map((c) => [c.id, c]));
   const before = status(saved);
   for (const check of current.checks) {

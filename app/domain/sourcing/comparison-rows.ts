@@ -87,6 +87,8 @@ export function offerCostRow(offer: OfferFacts, part: { maker: string; model: st
     unitPrice: costing.unitPriceQuoting ? moneyText(costing.unitPriceQuoting) : null,
     landed: costing.totalQuoting ? roundedText(costing.totalQuoting) : null,
     rate: rateText(costing.rate),
-    missingRate: costing.missingRate ? `No ${costing.missingRate.from} → ${costing.missingRate.to} rate dated on or before ${asOf}: add one under Rates.` : null,
+    missingRate: costing.missingRate
+      ? `No ${costing.missingRate.from} → ${costing.missingRate.to} rate dated on or before ${asOf}: add one under Rates.`
+      : null,
   };
 }

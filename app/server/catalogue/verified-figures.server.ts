@@ -12,7 +12,12 @@ export async function recomputeVerifiedFigures(db: Kysely<Database> | Transactio
     .where("status", "=", "approved")
     .execute();
   const values = readings.map((r) => r.stc_pmax_w);
-  const verified = values.length ? weightedMedian(values, readings.map((r) => r.weight)) : null;
+  const verified = values.length
+    ? weightedMedian(
+        values,
+        readings.map((r) => r.weight),
+      )
+    : null;
   // Spread as a share of the central value (scaled MAD / median), shown beside the count.
   const spreadPct = values.length >= 2 ? (100 * scaledMad(values)) / median(values) : null;
   await db

@@ -84,17 +84,44 @@ export async function findInverterPart(id: string): Promise<NamedPart<InverterPa
 /** Everything a plan form offers to choose from, labelled with the figures that matter. */
 export async function partChoices() {
   const [modules, controllers, batteries, inverters] = await Promise.all([
-    db.selectFrom("pv_module").select(["id", "maker", "model", "pmax_w", "verified_pmax_w", "verified_reading_count"]).where("merged_into", "is", null).orderBy("maker").orderBy("model").limit(2000).execute(),
-    db.selectFrom("charge_controller").select(["id", "maker", "model", "kind", "max_charge_current_a", "max_pv_voc_v"]).where("merged_into", "is", null).orderBy("maker").orderBy("model").execute(),
-    db.selectFrom("battery").select(["id", "maker", "model", "chemistry", "nominal_voltage_v", "capacity_ah"]).where("merged_into", "is", null).orderBy("maker").orderBy("model").execute(),
-    db.selectFrom("inverter").select(["id", "maker", "model", "continuous_w", "dc_input_voltage_v"]).where("merged_into", "is", null).orderBy("continuous_w").execute(),
+    db
+      .selectFrom("pv_module")
+      .select(["id", "maker", "model", "pmax_w", "verified_pmax_w", "verified_reading_count"])
+      .where("merged_into", "is", null)
+      .orderBy("maker")
+      .orderBy("model")
+      .limit(2000)
+      .execute(),
+    db
+      .selectFrom("charge_controller")
+      .select(["id", "maker", "model", "kind", "max_charge_current_a", "max_pv_voc_v"])
+      .where("merged_into", "is", null)
+      .orderBy("maker")
+      .orderBy("model")
+      .execute(),
+    db
+      .selectFrom("battery")
+      .select(["id", "maker", "model", "chemistry", "nominal_voltage_v", "capacity_ah"])
+      .where("merged_into", "is", null)
+      .orderBy("maker")
+      .orderBy("model")
+      .execute(),
+    db
+      .selectFrom("inverter")
+      .select(["id", "maker", "model", "continuous_w", "dc_input_voltage_v"])
+      .where("merged_into", "is", null)
+      .orderBy("continuous_w")
+      .execute(),
   ]);
   return {
     modules: modules.map((m) => ({
       id: m.id,
       label: `${m.maker} ${m.model} — ${m.pmax_w} W${m.verified_pmax_w ? `, verified ${m.verified_pmax_w.toFixed(0)} W from ${m.verified_reading_count} readings` : ", no readings"}`,
     })),
-    controllers: controllers.map((c) => ({ id: c.id, label: `${c.maker} ${c.model} — ${c.kind.toUpperCase()} ${c.max_charge_current_a} A, max ${c.max_pv_voc_v} V` })),
+    controllers: controllers.map((c) => ({
+      id: c.id,
+      label: `${c.maker} ${c.model} — ${c.kind.toUpperCase()} ${c.max_charge_current_a} A, max ${c.max_pv_voc_v} V`,
+    })),
     batteries: batteries.map((b) => ({ id: b.id, label: `${b.maker} ${b.model} — ${b.chemistry}, ${b.nominal_voltage_v} V ${b.capacity_ah} Ah` })),
     inverters: inverters.map((i) => ({ id: i.id, label: `${i.maker} ${i.model} — ${i.continuous_w} W, ${i.dc_input_voltage_v} V DC` })),
   };

@@ -59,6 +59,10 @@ export async function buildPlanInput(teamId: string, choices: PlanChoices): Prom
   return {
     ok: true,
     input,
-    sources: { siteName: site.name, loadSheetName: sheet.name, parts: { module: module.label, controller: controller.label, battery: battery.label, inverter: inverter?.label ?? null } },
+    sources: {
+      siteName: site.name,
+      loadSheetName: sheet.name,
+      parts: { module: module.label, controller: controller.label, battery: battery.label, inverter: inverter?.label ?? null },
+    },
   };
 }

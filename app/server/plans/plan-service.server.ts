@@ -6,8 +6,7 @@ import { buildPlanInput, type PlanSources } from "./plan-inputs.server";
 import { computePlan } from "./plans.server";
 
 export type PlanFromChoices =
-  | { ok: true; choices: PlanChoices; input: KitPlanInput; plan: KitPlan; sources: PlanSources }
-  | { ok: false; message: string; fields: Record<string, string> };
+  { ok: true; choices: PlanChoices; input: KitPlanInput; plan: KitPlan; sources: PlanSources } | { ok: false; message: string; fields: Record<string, string> };
 
 export async function planFromChoices(teamId: string, body: unknown): Promise<PlanFromChoices> {
   const parsed = planChoicesSchema.safeParse(body);

@@ -52,7 +52,13 @@ export async function createPlan(teamId: string, userId: string | null, choices:
 /** A new revision; the row lock on the plan keeps two simultaneous saves from taking one number. */
 export async function addRevision(teamId: string, planId: string, userId: string, choices: PlanChoices, input: KitPlanInput, plan: KitPlan, note: string) {
   return db.transaction().execute(async (trx) => {
-    const current = await trx.selectFrom("kit_plan").select(["latest_revision"]).where("team_id", "=", teamId).where("id", "=", planId).forUpdate().executeTakeFirst();
+    const current = await trx
+      .selectFrom("kit_plan")
+      .select(["latest_revision"])
+      .where("team_id", "=", teamId)
+      .where("id", "=", planId)
+      .forUpdate()
+      .executeTakeFirst();
     if (!current) return null;
     const revision = current.latest_revision + 1;
     await trx
@@ -82,7 +88,15 @@ export function listPlans(teamId: string) {
     .selectFrom("kit_plan")
     .innerJoin("kit_plan_revision as r", (j) => j.onRef("r.plan_id", "=", "kit_plan.id").onRef("r.revision", "=", "kit_plan.latest_revision"))
     .innerJoin("site", "site.id", "kit_plan.site_id")
-    .select(["kit_plan.id", "kit_plan.name", "kit_plan.latest_revision", "kit_plan.updated_at", "site.name as siteName", "r.failing_safety_checks", "r.overrides"])
+    .select([
+      "kit_plan.id",
+      "kit_plan.name",
+      "kit_plan.latest_revision",
+      "kit_plan.updated_at",
+      "site.name as siteName",
+      "r.failing_safety_checks",
+      "r.overrides",
+    ])
     .where("kit_plan.team_id", "=", teamId)
     .orderBy("kit_plan.updated_at", "desc")
     .execute();
@@ -98,7 +112,13 @@ export async function findPlan(teamId: string, planId: string, revision?: number
   const history = await db
     .selectFrom("kit_plan_revision")
     .leftJoin("user", "user.id", "kit_plan_revision.created_by")
-    .select(["kit_plan_revision.revision", "kit_plan_revision.note", "kit_plan_revision.created_at", "kit_plan_revision.failing_safety_checks", "user.name as byName"])
+    .select([
+      "kit_plan_revision.revision",
+      "kit_plan_revision.note",
+      "kit_plan_revision.created_at",
+      "kit_plan_revision.failing_safety_checks",
+      "user.name as byName",
+    ])
     .where("plan_id", "=", plan.id)
     .orderBy("revision", "desc")
     .execute();
@@ -108,7 +128,13 @@ export async function findPlan(teamId: string, planId: string, revision?: number
 /** Records overrides of failing safety checks on the plan's latest revision. */
 export async function saveOverrides(teamId: string, planId: string, overrides: PlanOverrideJson[]) {
   return db.transaction().execute(async (trx) => {
-    const plan = await trx.selectFrom("kit_plan").select(["latest_revision"]).where("team_id", "=", teamId).where("id", "=", planId).forUpdate().executeTakeFirst();
+    const plan = await trx
+      .selectFrom("kit_plan")
+      .select(["latest_revision"])
+      .where("team_id", "=", teamId)
+      .where("id", "=", planId)
+      .forUpdate()
+      .executeTakeFirst();
     if (!plan) return false;
     await trx
       .updateTable("kit_plan_revision")

@@ -29,7 +29,9 @@ export async function handleDecisionAction(request: Request, options: { redirect
     return data({ result: submission.reply({ formErrors: [why] }) }, { status: 409 });
   }
   const verb = value.decision === "approved" ? "Approved" : "Rejected";
-  const skipped = outcome.skipped.length ? ` ${plural(outcome.skipped.length, "reading")} had already been decided and ${outcome.skipped.length === 1 ? "was" : "were"} left as they were.` : "";
+  const skipped = outcome.skipped.length
+    ? ` ${plural(outcome.skipped.length, "reading")} had already been decided and ${outcome.skipped.length === 1 ? "was" : "were"} left as they were.`
+    : "";
   return redirectWithFlash(options.redirectTo(readingIds), {
     kind: "success",
     message: `${verb} ${plural(outcome.decided.length, "reading")}; the submitter${outcome.decided.length === 1 ? " is" : "s are"} told by e-mail.${skipped}`,

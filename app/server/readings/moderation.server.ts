@@ -37,7 +37,10 @@ export async function decideReadings(request: DecisionRequest): Promise<Decision
         continue;
       }
       await trx.updateTable("field_reading").set({ status: request.decision }).where("id", "=", row.id).execute();
-      await trx.insertInto("reading_decision").values({ reading_id: row.id, decided_by: request.curatorId, decision: request.decision, reason: request.reason }).execute();
+      await trx
+        .insertInto("reading_decision")
+        .values({ reading_id: row.id, decided_by: request.curatorId, decision: request.decision, reason: request.reason })
+        .execute();
       // Verified figures change only when an approved reading enters or leaves the set.
       if (request.decision === "approved" || row.status === "approved") touchedModules.add(row.module_id);
       decided.push({ id: row.id, moduleId: row.module_id });
@@ -45,7 +48,11 @@ export async function decideReadings(request: DecisionRequest): Promise<Decision
     for (const moduleId of touchedModules) await recomputeVerifiedFigures(trx, moduleId);
     return { decided, skipped };
   });
-  await notifySubmitters(outcome.decided.map((d) => d.id), request.decision, request.reason);
+  await notifySubmitters(
+    outcome.decided.map((d) => d.id),
+    request.decision,
+    request.reason,
+  );
   return outcome;
 }
 
@@ -77,7 +84,14 @@ async function notifySubmitters(readingIds: string[], decision: Decision, reason
       });
     } catch (error) {
       // The decision is committed; a mail failure must not undo it or hide it from the curator.
-      console.error(JSON.stringify({ level: "error", msg: "reading decision mail failed", readingId: row.id, error: error instanceof Error ? error.message : String(error) }));
+      console.error(
+        JSON.stringify({
+          level: "error",
+          msg: "reading decision mail failed",
+          readingId: row.id,
+          error: error instanceof Error ? error.message : String(error),
+        }),
+      );
     }
   }
 }

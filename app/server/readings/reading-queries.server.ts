@@ -76,7 +76,15 @@ export async function findReadingForViewer(viewer: ReadingViewer, id: string) {
     .leftJoin("user as u", "u.id", "r.submitted_by")
     .leftJoin("organization as o", "o.id", "r.team_id")
     .selectAll("r")
-    .select(["m.maker", "m.model", "m.pmax_w as nameplatePmaxW", "m.verified_pmax_w as verifiedPmaxW", "m.verified_reading_count as verifiedReadingCount", "u.name as submitterName", "o.name as teamName"])
+    .select([
+      "m.maker",
+      "m.model",
+      "m.pmax_w as nameplatePmaxW",
+      "m.verified_pmax_w as verifiedPmaxW",
+      "m.verified_reading_count as verifiedReadingCount",
+      "u.name as submitterName",
+      "o.name as teamName",
+    ])
     .where("r.id", "=", id);
   if (!viewer.seesAll) query = query.where("r.team_id", "=", viewer.teamId ?? "");
   return query.executeTakeFirst();
@@ -111,14 +119,26 @@ export async function approvedValuesByModule(moduleIds: string[], excludeReading
 export async function listPendingQueue({ limit, offset }: { limit: number; offset: number }) {
   const [items, total] = await Promise.all([
     summaryQuery()
-      .select(["r.sweep", "r.photo_id as photoId", "r.measured_vmp_v as vmpV", "r.measured_imp_a as impA", "r.irradiance_wm2 as irradianceWm2", "r.cell_temp_c as cellTempC", "r.module_temp_c as moduleTempC"])
+      .select([
+        "r.sweep",
+        "r.photo_id as photoId",
+        "r.measured_vmp_v as vmpV",
+        "r.measured_imp_a as impA",
+        "r.irradiance_wm2 as irradianceWm2",
+        "r.cell_temp_c as cellTempC",
+        "r.module_temp_c as moduleTempC",
+      ])
       .where("r.status", "=", "pending")
       .orderBy("r.created_at")
       .orderBy("r.id")
       .limit(limit)
       .offset(offset)
       .execute(),
-    db.selectFrom("field_reading").select((eb) => eb.fn.countAll<number>().as("count")).where("status", "=", "pending").executeTakeFirstOrThrow(),
+    db
+      .selectFrom("field_reading")
+      .select((eb) => eb.fn.countAll<number>().as("count"))
+      .where("status", "=", "pending")
+      .executeTakeFirstOrThrow(),
   ]);
   return { items, total: Number(total.count) };
 }
@@ -130,7 +150,17 @@ export async function listRecentDecisions(limit: number) {
     .innerJoin("field_reading as r", "r.id", "d.reading_id")
     .innerJoin("pv_module as m", "m.id", "r.module_id")
     .leftJoin("user as u", "u.id", "d.decided_by")
-    .select(["d.id", "d.decision", "d.reason", "d.decided_at as decidedAt", "r.id as readingId", "m.maker", "m.model", "r.stc_pmax_w as stcPmaxW", "u.name as curatorName"])
+    .select([
+      "d.id",
+      "d.decision",
+      "d.reason",
+      "d.decided_at as decidedAt",
+      "r.id as readingId",
+      "m.maker",
+      "m.model",
+      "r.stc_pmax_w as stcPmaxW",
+      "u.name as curatorName",
+    ])
     .orderBy("d.decided_at", "desc")
     .orderBy(sql`d.id`)
     .limit(limit)

@@ -9,7 +9,14 @@ import { moduleRow, type ModuleComparisonRow } from "~/domain/sourcing/module-ro
 import type { OfferFacts, OfferPartKind, PartFiguresByKind } from "~/domain/sourcing/offer-facts";
 import type { TeamPricing } from "~/domain/sourcing/offer-costing";
 import { todayIso } from "~/domain/sourcing/offer-validity";
-import { batteryRow, controllerRow, inverterRow, type BatteryComparisonRow, type ControllerComparisonRow, type InverterComparisonRow } from "~/domain/sourcing/part-rows";
+import {
+  batteryRow,
+  controllerRow,
+  inverterRow,
+  type BatteryComparisonRow,
+  type ControllerComparisonRow,
+  type InverterComparisonRow,
+} from "~/domain/sourcing/part-rows";
 
 export interface RowsByKind {
   modules: ModuleComparisonRow;
@@ -34,13 +41,23 @@ export interface Comparison<K extends OfferPartKind> {
 }
 
 /** Rows in no particular order: the page sorts them (and the API returns them as built). */
-export async function compareOffers<K extends OfferPartKind>(db: Executor, teamId: string, kind: K, need: ComparisonNeed, asOf: string = todayIso()): Promise<Comparison<K>> {
+export async function compareOffers<K extends OfferPartKind>(
+  db: Executor,
+  teamId: string,
+  kind: K,
+  need: ComparisonNeed,
+  asOf: string = todayIso(),
+): Promise<Comparison<K>> {
   const [offers, pricing, expiredCount] = await Promise.all([
     listValidOffers(db, teamId, { partKind: kind, asOf }),
     loadTeamPricing(db, teamId, asOf),
     countExpiredOffers(db, teamId, kind, asOf),
   ]);
-  const parts = await loadPartFigures(db, kind, offers.map((o) => o.partId));
+  const parts = await loadPartFigures(
+    db,
+    kind,
+    offers.map((o) => o.partId),
+  );
   const build = BUILDERS[kind] as RowBuilder<K>;
   const rows: RowsByKind[K][] = [];
   let missingPartCount = 0;

@@ -22,7 +22,14 @@ export async function loadOfferChoices(db: Executor, teamId: string): Promise<Of
     ...OFFER_PART_KINDS.map((k) => listPartChoices(db, k)),
   ]);
   return {
-    suppliers: suppliers.map((s) => ({ id: s.id, name: s.name, currency: s.currency, defaultShippingPerUnit: s.default_shipping_per_unit, defaultShippingPerOrder: s.default_shipping_per_order, defaultLeadTimeDays: s.default_lead_time_days })),
+    suppliers: suppliers.map((s) => ({
+      id: s.id,
+      name: s.name,
+      currency: s.currency,
+      defaultShippingPerUnit: s.default_shipping_per_unit,
+      defaultShippingPerOrder: s.default_shipping_per_order,
+      defaultLeadTimeDays: s.default_lead_time_days,
+    })),
     parts: Object.fromEntries(OFFER_PART_KINDS.map((k, i) => [k, parts[i]])) as OfferFormChoices["parts"],
   };
 }
@@ -30,7 +37,13 @@ export async function loadOfferChoices(db: Executor, teamId: string): Promise<Of
 export type OfferSaveOutcome = { ok: false; reply: SubmissionResult<string[]> } | { ok: true; id: string; created: boolean };
 
 /** Saves a new offer, or `existing` (whose part may have been merged since: keeping it is allowed). */
-export async function saveOfferForm(db: Executor, teamId: string, userId: string | null, formData: FormData, existing?: { id: string; partId: string }): Promise<OfferSaveOutcome> {
+export async function saveOfferForm(
+  db: Executor,
+  teamId: string,
+  userId: string | null,
+  formData: FormData,
+  existing?: { id: string; partId: string },
+): Promise<OfferSaveOutcome> {
   const submission = parseWithZod(formData, { schema: offerFormSchema });
   if (submission.status !== "success") return { ok: false, reply: submission.reply() };
   const form = submission.value;
@@ -39,7 +52,10 @@ export async function saveOfferForm(db: Executor, teamId: string, userId: string
   const part = isUuid(form.partId) ? await findPart(db, form.partKind, form.partId) : undefined;
   if (!part) return { ok: false, reply: submission.reply({ fieldErrors: { partId: ["That part is not in the catalogue: choose it from the list."] } }) };
   if (part.merged_into && part.id !== existing?.partId) {
-    return { ok: false, reply: submission.reply({ fieldErrors: { partId: [`${part.maker} ${part.model} was merged into another model in the catalogue: choose that one.`] } }) };
+    return {
+      ok: false,
+      reply: submission.reply({ fieldErrors: { partId: [`${part.maker} ${part.model} was merged into another model in the catalogue: choose that one.`] } }),
+    };
   }
   const values = offerValuesFromForm(form, supplier);
   try {
@@ -51,6 +67,9 @@ export async function saveOfferForm(db: Executor, teamId: string, userId: string
     return { ok: true, id: await createOffer(db, teamId, userId, values), created: true };
   } catch (error) {
     if (!isDuplicateOffer(error)) throw error;
-    return { ok: false, reply: submission.reply({ fieldErrors: { partId: [`${supplier.name} already has an offer for ${part.maker} ${part.model}: edit that one instead.`] } }) };
+    return {
+      ok: false,
+      reply: submission.reply({ fieldErrors: { partId: [`${supplier.name} already has an offer for ${part.maker} ${part.model}: edit that one instead.`] } }),
+    };
   }
 }

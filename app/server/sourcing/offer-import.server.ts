@@ -17,7 +17,6 @@ import type { OfferImportReport } from "~/lib/sourcing-types";
 
 export type { OfferImportReport };
 
-
 interface ResolvedRow {
   row: number;
   supplierName: string;
@@ -45,7 +44,16 @@ async function partIndex(db: Executor, kind: OfferPartKind, makers: string[]) {
 
 async function resolve(db: Executor, teamId: string, text: string, pricing: TeamPricing): Promise<Resolution> {
   const check = checkOfferCsv(text, pricing.asOf);
-  const report: OfferImportReport = { rowCount: check.rowCount, readyCount: 0, fileErrors: check.fileErrors, problems: check.problems, newSuppliers: [], newOffers: 0, updatedOffers: 0, warnings: [] };
+  const report: OfferImportReport = {
+    rowCount: check.rowCount,
+    readyCount: 0,
+    fileErrors: check.fileErrors,
+    problems: check.problems,
+    newSuppliers: [],
+    newOffers: 0,
+    updatedOffers: 0,
+    warnings: [],
+  };
   const resolution: Resolution = { report, rows: [], supplierIds: new Map() };
   if (check.fileErrors.length) return resolution;
 
@@ -68,7 +76,9 @@ async function resolve(db: Executor, teamId: string, text: string, pricing: Team
     parts.set(kind, await partIndex(db, kind, [...new Set(check.rows.filter((r) => r.kind === kind).map((r) => r.maker.toLowerCase()))]));
   }
   const existingOffers = new Set(
-    (await db.selectFrom("offer").select(["supplier_id", "part_kind", "part_id"]).where("team_id", "=", teamId).execute()).map((o) => key(o.supplier_id, o.part_kind, o.part_id)),
+    (await db.selectFrom("offer").select(["supplier_id", "part_kind", "part_id"]).where("team_id", "=", teamId).execute()).map((o) =>
+      key(o.supplier_id, o.part_kind, o.part_id),
+    ),
   );
 
   const firstRowOf = new Map<string, number>();
@@ -83,7 +93,8 @@ async function resolve(db: Executor, teamId: string, text: string, pricing: Team
     const fresh = newSupplierCurrency.get(key(r.supplier));
     if (!supplier && !fresh?.currency) problem(r, "currency", `"${r.supplier}" is a new supplier: give its currency on at least one of its rows.`);
     const partId = parts.get(r.kind)?.get(key(r.maker, r.model));
-    if (!partId) problem(r, "model", `No ${KIND_CSV_WORD[r.kind]} "${r.maker} ${r.model}" in the catalogue: check the spelling and the kind, or ask a curator to add it.`);
+    if (!partId)
+      problem(r, "model", `No ${KIND_CSV_WORD[r.kind]} "${r.maker} ${r.model}" in the catalogue: check the spelling and the kind, or ask a curator to add it.`);
     else {
       const identity = key(r.supplier, r.kind, partId);
       const first = firstRowOf.get(identity);
@@ -125,7 +136,9 @@ async function resolve(db: Executor, teamId: string, text: string, pricing: Team
       convertMoney(money(1, currency), pricing.quotingCurrency, pricing.rates, pricing.asOf);
     } catch (error) {
       if (!(error instanceof MissingRateError)) throw error;
-      report.warnings.push(`No ${currency} → ${pricing.quotingCurrency} exchange rate yet: the comparisons cannot convert these offers until you add one under Rates.`);
+      report.warnings.push(
+        `No ${currency} → ${pricing.quotingCurrency} exchange rate yet: the comparisons cannot convert these offers until you add one under Rates.`,
+      );
     }
   }
   return resolution;
@@ -157,7 +170,11 @@ export async function importOffers(db: Executor, teamId: string, userId: string 
       const { report, rows, supplierIds } = await resolve(trx, teamId, text, pricing);
       if (refused(report)) throw new RefusedImport(report);
       for (const s of report.newSuppliers) {
-        const created = await trx.insertInto("supplier").values({ team_id: teamId, name: s.name, currency: s.currency, created_by: userId }).returning("id").executeTakeFirstOrThrow();
+        const created = await trx
+          .insertInto("supplier")
+          .values({ team_id: teamId, name: s.name, currency: s.currency, created_by: userId })
+          .returning("id")
+          .executeTakeFirstOrThrow();
         supplierIds.set(key(s.name), created.id);
       }
       for (const r of rows) await upsertOffer(trx, teamId, userId, { ...r.values, supplierId: supplierIds.get(key(r.supplierName))! });

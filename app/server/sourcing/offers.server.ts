@@ -42,7 +42,9 @@ function offerQuery(db: Executor, teamId: string) {
       sql<string | null>`coalesce(pv_module.maker, battery.maker, charge_controller.maker, inverter.maker)`.as("maker"),
       sql<string | null>`coalesce(pv_module.model, battery.model, charge_controller.model, inverter.model)`.as("model"),
       // Break prices as text inside the JSON, so that they never become JSON numbers (floats).
-      sql<PriceBreakText[]>`(select coalesce(json_agg(json_build_object('minQuantity', b.min_quantity, 'unitPrice', b.unit_price::text) order by b.min_quantity), '[]'::json)
+      sql<
+        PriceBreakText[]
+      >`(select coalesce(json_agg(json_build_object('minQuantity', b.min_quantity, 'unitPrice', b.unit_price::text) order by b.min_quantity), '[]'::json)
         from offer_price_break b where b.offer_id = offer.id)`.as("priceBreaks"),
     ]);
 }
@@ -116,7 +118,12 @@ export async function listOffers(db: Executor, teamId: string, filter: OfferFilt
     query = query.where("offer.part_id", "in", ids);
   }
   if (filter.validOnly) query = query.where(stillValid(asOf));
-  const rows = await query.orderBy(sql`array_position(array['modules', 'batteries', 'controllers', 'inverters'], offer.part_kind)`).orderBy("maker").orderBy("model").orderBy(sql`lower(supplier.name)`).execute();
+  const rows = await query
+    .orderBy(sql`array_position(array['modules', 'batteries', 'controllers', 'inverters'], offer.part_kind)`)
+    .orderBy("maker")
+    .orderBy("model")
+    .orderBy(sql`lower(supplier.name)`)
+    .execute();
   return rows.map((r) => toListItem(r, asOf));
 }
 

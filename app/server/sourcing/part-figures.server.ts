@@ -29,7 +29,12 @@ async function survivors(db: Executor, kind: OfferPartKind, ids: readonly string
   return result;
 }
 
-async function figuresFor<K extends OfferPartKind>(db: Executor, kind: K, ids: readonly string[], load: (db: Executor, ids: string[]) => Promise<PartFiguresByKind[K][]>) {
+async function figuresFor<K extends OfferPartKind>(
+  db: Executor,
+  kind: K,
+  ids: readonly string[],
+  load: (db: Executor, ids: string[]) => Promise<PartFiguresByKind[K][]>,
+) {
   const byAsked = new Map<string, PartFiguresByKind[K]>();
   if (!ids.length) return byAsked;
   const stayed = await survivors(db, kind, ids);
@@ -83,7 +88,16 @@ function loadBatteries(db: Executor, ids: string[]): Promise<BatteryFigures[]> {
 function loadControllers(db: Executor, ids: string[]): Promise<ControllerFigures[]> {
   return db
     .selectFrom("charge_controller")
-    .select(["id", "maker", "model", "kind", "battery_voltages_v as batteryVoltagesV", "max_pv_voc_v as maxPvVocV", "max_charge_current_a as maxChargeCurrentA", "max_pv_power_w as maxPvPowerW"])
+    .select([
+      "id",
+      "maker",
+      "model",
+      "kind",
+      "battery_voltages_v as batteryVoltagesV",
+      "max_pv_voc_v as maxPvVocV",
+      "max_charge_current_a as maxChargeCurrentA",
+      "max_pv_power_w as maxPvPowerW",
+    ])
     .where("id", "in", ids)
     .execute();
 }
@@ -91,7 +105,16 @@ function loadControllers(db: Executor, ids: string[]): Promise<ControllerFigures
 function loadInverters(db: Executor, ids: string[]): Promise<InverterFigures[]> {
   return db
     .selectFrom("inverter")
-    .select(["id", "maker", "model", "continuous_w as continuousW", "surge_w as surgeW", "dc_input_voltage_v as dcInputVoltageV", "efficiency_pct as efficiencyPct", "idle_draw_w as idleDrawW"])
+    .select([
+      "id",
+      "maker",
+      "model",
+      "continuous_w as continuousW",
+      "surge_w as surgeW",
+      "dc_input_voltage_v as dcInputVoltageV",
+      "efficiency_pct as efficiencyPct",
+      "idle_draw_w as idleDrawW",
+    ])
     .where("id", "in", ids)
     .execute();
 }

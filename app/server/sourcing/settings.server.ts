@@ -42,11 +42,18 @@ export async function listRates(db: Executor, teamId: string): Promise<RateRow[]
 }
 
 /** A rate for a pair on a day replaces an earlier entry for the same pair and day. */
-export async function saveRate(db: Executor, teamId: string, userId: string | null, rate: { fromCurrency: string; toCurrency: string; rate: string; asOf: string }) {
+export async function saveRate(
+  db: Executor,
+  teamId: string,
+  userId: string | null,
+  rate: { fromCurrency: string; toCurrency: string; rate: string; asOf: string },
+) {
   await db
     .insertInto("exchange_rate")
     .values({ team_id: teamId, from_currency: rate.fromCurrency, to_currency: rate.toCurrency, rate: rate.rate, as_of: rate.asOf, created_by: userId })
-    .onConflict((oc) => oc.columns(["team_id", "from_currency", "to_currency", "as_of"]).doUpdateSet({ rate: rate.rate, created_by: userId, created_at: new Date() }))
+    .onConflict((oc) =>
+      oc.columns(["team_id", "from_currency", "to_currency", "as_of"]).doUpdateSet({ rate: rate.rate, created_by: userId, created_at: new Date() }),
+    )
     .execute();
 }
 

@@ -43,7 +43,12 @@ export async function findSupplier(db: Executor, teamId: string, supplierId: str
 }
 
 export async function findSupplierByName(db: Executor, teamId: string, name: string) {
-  return db.selectFrom("supplier").selectAll().where("team_id", "=", teamId).where(sql<string>`lower(name)`, "=", name.trim().toLowerCase()).executeTakeFirst();
+  return db
+    .selectFrom("supplier")
+    .selectAll()
+    .where("team_id", "=", teamId)
+    .where(sql<string>`lower(name)`, "=", name.trim().toLowerCase())
+    .executeTakeFirst();
 }
 
 export function isDuplicateName(error: unknown) {

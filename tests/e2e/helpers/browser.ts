@@ -7,7 +7,16 @@ import { chromium, type BrowserContext, type Page } from "playwright-core";
 export const BASE_URL = process.env.E2E_BASE_URL ?? "http://127.0.0.1:3310";
 export const MAIL_URL = process.env.E2E_MAIL_URL ?? "http://127.0.0.1:2680";
 
-const FLAGS = ["--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"];
+const FLAGS = [
+  "--headless",
+  "--no-sandbox",
+  "--disable-gpu",
+  "--disable-quic",
+  "--no-first-run",
+  "--disable-background-networking",
+  "--disable-component-update",
+  "--disable-sync",
+];
 
 export async function openBrowser(viewport = { width: 1280, height: 900 }): Promise<{ context: BrowserContext; page: Page; close(): Promise<void> }> {
   const profile = mkdtempSync(join(tmpdir(), "kitwright-e2e-"));

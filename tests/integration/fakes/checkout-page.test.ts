@@ -69,9 +69,7 @@ describe("payments fake: hosted test payment page", () => {
   it("asks for a test card or a complete form", async () => {
     const session = await createDepositSession(stripeFor(fake.port));
     expect(await (await submit(session.url!, { card: "4111 1111 1111 1111" })).text()).toContain("Use a test card");
-    expect(await (await submit(session.url!, { card: "4242424242424242", expiry: "01/20" })).text()).toContain(
-      "expiry date",
-    );
+    expect(await (await submit(session.url!, { card: "4242424242424242", expiry: "01/20" })).text()).toContain("expiry date");
   });
 
   it("answers an unknown session with a 404 page", async () => {

@@ -36,7 +36,7 @@ describe("mail fake", () => {
       to: "Ana Installer <ana@example.test>",
       subject: "Your quote Q-104 is ready",
       text: "Open your quote: http://localhost/q/104",
-      html: "<p>Open <a href=\"http://localhost/q/104\">your quote</a></p>",
+      html: '<p>Open <a href="http://localhost/q/104">your quote</a></p>',
     });
 
     const [message] = await messages(fake.url);

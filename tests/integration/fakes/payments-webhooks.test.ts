@@ -55,9 +55,7 @@ describe("payments fake: paying and webhooks", () => {
     });
     // The signature covers the body: a changed amount must not verify.
     const tampered = delivery!.rawBody.replace('"amount_total": 13345', '"amount_total": 1');
-    expect(() => stripe.webhooks.constructEvent(tampered, delivery!.signature, WEBHOOK_SECRET)).toThrow(
-      Stripe.errors.StripeSignatureVerificationError,
-    );
+    expect(() => stripe.webhooks.constructEvent(tampered, delivery!.signature, WEBHOOK_SECRET)).toThrow(Stripe.errors.StripeSignatureVerificationError);
 
     const paid = await stripe.checkout.sessions.retrieve(session.id);
     expect(paid).toMatchObject({ status: "complete", payment_status: "paid" });
@@ -122,9 +120,7 @@ describe("payments fake: paying and webhooks", () => {
 
     await pay(fake.url, session.id, "4242424242424242");
     // 1 attempt + 3 retries 50 ms apart; poll rather than guess how long that takes here.
-    await expect
-      .poll(() => fake.state.deliveries.length, { timeout: 5000, interval: 50 })
-      .toBe(4);
+    await expect.poll(() => fake.state.deliveries.length, { timeout: 5000, interval: 50 }).toBe(4);
     await new Promise((resolve) => setTimeout(resolve, 200));
     const deliveries = (await (await fetch(`${fake.url}/_fake/deliveries`)).json()) as {
       data: { statusCode: number | null; error: string | null }[];

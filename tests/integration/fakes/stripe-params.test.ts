@@ -16,10 +16,7 @@ describe("parseStripeForm", () => {
 
     expect(parseStripeForm(body)).toEqual({
       mode: "payment",
-      line_items: [
-        { price_data: { unit_amount: "500", product_data: { name: "Panel & mount" } }, quantity: "1" },
-        { quantity: "2" },
-      ],
+      line_items: [{ price_data: { unit_amount: "500", product_data: { name: "Panel & mount" } }, quantity: "1" }, { quantity: "2" }],
       metadata: { quoteId: "q1" },
       expand: ["line_items", "payment_intent"],
     });

@@ -33,17 +33,53 @@ export async function planningSetup(teamId: string) {
   const tag = unique();
   const module = await db
     .insertInto("pv_module")
-    .values({ maker: "Fixture", model: `M-${tag}`, cell_technology: "mono-PERC", cells_in_series: 60, pmax_w: 330, vmp_v: 33.5, imp_a: 9.85, voc_v: 40.6, isc_a: 10.4, gamma_pmax_pct_per_c: -0.38, beta_voc_pct_per_c: -0.29, alpha_isc_pct_per_c: 0.05, noct_c: 45, length_mm: 1690, width_mm: 1000, mass_kg: 19 })
+    .values({
+      maker: "Fixture",
+      model: `M-${tag}`,
+      cell_technology: "mono-PERC",
+      cells_in_series: 60,
+      pmax_w: 330,
+      vmp_v: 33.5,
+      imp_a: 9.85,
+      voc_v: 40.6,
+      isc_a: 10.4,
+      gamma_pmax_pct_per_c: -0.38,
+      beta_voc_pct_per_c: -0.29,
+      alpha_isc_pct_per_c: 0.05,
+      noct_c: 45,
+      length_mm: 1690,
+      width_mm: 1000,
+      mass_kg: 19,
+    })
     .returning("id")
     .executeTakeFirstOrThrow();
   const controller = await db
     .insertInto("charge_controller")
-    .values({ maker: "Fixture", model: `C-${tag}`, kind: "mppt", battery_voltages_v: [12, 24, 48], max_pv_voc_v: 150, max_charge_current_a: 60, max_pv_power_w: JSON.stringify({ "12": 860, "24": 1720, "48": 3440 }), efficiency_pct: 97 })
+    .values({
+      maker: "Fixture",
+      model: `C-${tag}`,
+      kind: "mppt",
+      battery_voltages_v: [12, 24, 48],
+      max_pv_voc_v: 150,
+      max_charge_current_a: 60,
+      max_pv_power_w: JSON.stringify({ "12": 860, "24": 1720, "48": 3440 }),
+      efficiency_pct: 97,
+    })
     .returning("id")
     .executeTakeFirstOrThrow();
   const battery = await db
     .insertInto("battery")
-    .values({ maker: "Fixture", model: `B-${tag}`, chemistry: "lifepo4", nominal_voltage_v: 12.8, capacity_ah: 200, capacity_hour_rate_h: 5, usable_dod_pct: 90, cycle_life: 4000, round_trip_efficiency_pct: 95 })
+    .values({
+      maker: "Fixture",
+      model: `B-${tag}`,
+      chemistry: "lifepo4",
+      nominal_voltage_v: 12.8,
+      capacity_ah: 200,
+      capacity_hour_rate_h: 5,
+      usable_dod_pct: 90,
+      cycle_life: 4000,
+      round_trip_efficiency_pct: 95,
+    })
     .returning("id")
     .executeTakeFirstOrThrow();
   const inverter = await db

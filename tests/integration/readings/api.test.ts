@@ -8,7 +8,10 @@ import * as readingsApi from "~/routes/api.v1.readings";
 import { db } from "~/server/db.server";
 
 function jsonPost(client: RouteClient | null, body: unknown) {
-  return callRoute(preview.action, authedRequest(client, "/api/v1/readings/preview", { method: "POST", headers: { "Content-Type": "application/json" }, body: JSON.stringify(body) }));
+  return callRoute(
+    preview.action,
+    authedRequest(client, "/api/v1/readings/preview", { method: "POST", headers: { "Content-Type": "application/json" }, body: JSON.stringify(body) }),
+  );
 }
 
 function previewBody(moduleId: string, overrides: Record<string, unknown> = {}) {

@@ -125,7 +125,12 @@ export async function submitReading(client: RouteClient, form: FormData) {
 }
 
 /** Submits a good reading and returns its id. */
-export async function submitGoodReading(client: RouteClient, moduleId: string, overrides: Record<string, string> = {}, files: Parameters<typeof readingForm>[1] = {}) {
+export async function submitGoodReading(
+  client: RouteClient,
+  moduleId: string,
+  overrides: Record<string, string> = {},
+  files: Parameters<typeof readingForm>[1] = {},
+) {
   const result = await submitReading(client, readingForm(readingFields(moduleId, overrides), files));
   if (result.status !== 302) throw new Error(`submission failed (${result.status}): ${JSON.stringify(result.data)}`);
   return result.location!.split("/").pop()!;
@@ -133,8 +138,16 @@ export async function submitGoodReading(client: RouteClient, moduleId: string, o
 
 export async function countStored(userId: string) {
   const [readings, files] = await Promise.all([
-    db.selectFrom("field_reading").select((eb) => eb.fn.countAll<number>().as("n")).where("submitted_by", "=", userId).executeTakeFirstOrThrow(),
-    db.selectFrom("stored_file").select((eb) => eb.fn.countAll<number>().as("n")).where("uploaded_by", "=", userId).executeTakeFirstOrThrow(),
+    db
+      .selectFrom("field_reading")
+      .select((eb) => eb.fn.countAll<number>().as("n"))
+      .where("submitted_by", "=", userId)
+      .executeTakeFirstOrThrow(),
+    db
+      .selectFrom("stored_file")
+      .select((eb) => eb.fn.countAll<number>().as("n"))
+      .where("uploaded_by", "=", userId)
+      .executeTakeFirstOrThrow(),
   ]);
   return { readings: Number(readings.n), files: Number(files.n) };
 }

@@ -19,7 +19,11 @@ async function mailWithSubject(email: string, part: string) {
 }
 
 async function moduleRow(id: string) {
-  return db.selectFrom("pv_module").select(["verified_pmax_w", "verified_reading_count", "verified_ratio", "measured_density_wm2"]).where("id", "=", id).executeTakeFirstOrThrow();
+  return db
+    .selectFrom("pv_module")
+    .select(["verified_pmax_w", "verified_reading_count", "verified_ratio", "measured_density_wm2"])
+    .where("id", "=", id)
+    .executeTakeFirstOrThrow();
 }
 
 async function readingRow(id: string) {
@@ -39,7 +43,12 @@ describe("moderation", () => {
     expect(queue.status).toBe(200);
     expect(queue.data.queue.map((r: { id: string }) => r.id)).toContain(readingId);
 
-    const approve = await curator.client.action(review, "/review", { intent: "decide", readingId, decision: "approved", reason: "Clear sky, pyranometer in plane, photo shows the label." });
+    const approve = await curator.client.action(review, "/review", {
+      intent: "decide",
+      readingId,
+      decision: "approved",
+      reason: "Clear sky, pyranometer in plane, photo shows the label.",
+    });
     expect(approve.status, JSON.stringify(approve.data)).toBe(302);
     const reading = await readingRow(readingId);
     expect(reading.status).toBe("approved");
@@ -51,7 +60,9 @@ describe("moderation", () => {
 
     const detail = await installer.client.loader(readingPage, `/readings/${readingId}`, { readingId });
     expect(detail.data.reading.status).toBe("approved");
-    expect(detail.data.decisions).toEqual([expect.objectContaining({ decision: "approved", reason: "Clear sky, pyranometer in plane, photo shows the label.", curatorName: "Test mod-curator" })]);
+    expect(detail.data.decisions).toEqual([
+      expect.objectContaining({ decision: "approved", reason: "Clear sky, pyranometer in plane, photo shows the label.", curatorName: "Test mod-curator" }),
+    ]);
 
     const mail = await mailWithSubject(installer.email, "is approved");
     expect(mail.text).toContain("Reason: Clear sky, pyranometer in plane, photo shows the label.");
@@ -67,13 +78,23 @@ describe("moderation", () => {
     const before = await moduleRow(module.id);
     expect(before.verified_reading_count).toBe(1);
 
-    const second = await submitGoodReading(installer.client, module.id, {}, { sweepFile: { name: "weak.csv", type: "text/csv", bytes: sweepCsv({ scale: 0.6 }) } });
+    const second = await submitGoodReading(
+      installer.client,
+      module.id,
+      {},
+      { sweepFile: { name: "weak.csv", type: "text/csv", bytes: sweepCsv({ scale: 0.6 }) } },
+    );
     const noReason = await curator.client.action(review, "/review", { intent: "decide", readingId: second, decision: "rejected", reason: "" });
     expect(noReason.status).toBe(400);
     expect(noReason.data.result.error.reason[0]).toMatch(/reason/);
     expect((await readingRow(second)).status).toBe("pending");
 
-    const reject = await curator.client.action(review, "/review", { intent: "decide", readingId: second, decision: "rejected", reason: "Partial shade from the railing is visible in the photo." });
+    const reject = await curator.client.action(review, "/review", {
+      intent: "decide",
+      readingId: second,
+      decision: "rejected",
+      reason: "Partial shade from the railing is visible in the photo.",
+    });
     expect(reject.status).toBe(302);
     expect((await readingRow(second)).status).toBe("rejected");
     const after = await moduleRow(module.id);
@@ -106,12 +127,22 @@ describe("moderation", () => {
     const curator = await userWithRole("curator", "mod-curator-3");
     const module = await createTestModule("revoke");
     const readingId = await submitGoodReading(installer.client, module.id);
-    await curator.client.action(readingPage, `/readings/${readingId}`, { intent: "decide", readingId, decision: "approved", reason: "Looks right." }, { readingId });
+    await curator.client.action(
+      readingPage,
+      `/readings/${readingId}`,
+      { intent: "decide", readingId, decision: "approved", reason: "Looks right." },
+      { readingId },
+    );
     expect((await moduleRow(module.id)).verified_reading_count).toBe(1);
     // From the queue a decided reading is left alone (another curator was quicker).
     const stale = await curator.client.action(review, "/review", { intent: "decide", readingId, decision: "rejected", reason: "Second thoughts." });
     expect(stale.status).toBe(409);
-    const revoke = await curator.client.action(readingPage, `/readings/${readingId}`, { intent: "decide", readingId, decision: "rejected", reason: "The pyranometer was found out of calibration." }, { readingId });
+    const revoke = await curator.client.action(
+      readingPage,
+      `/readings/${readingId}`,
+      { intent: "decide", readingId, decision: "rejected", reason: "The pyranometer was found out of calibration." },
+      { readingId },
+    );
     expect(revoke.status).toBe(302);
     const after = await moduleRow(module.id);
     expect(after.verified_pmax_w).toBeNull();
@@ -128,8 +159,18 @@ describe("moderation", () => {
     const curator = await userWithRole("curator", "mod-curator-4");
     const module = await createTestModule("bulk");
     const measured = await submitGoodReading(installer.client, module.id);
-    const weaker = await submitGoodReading(installer.client, module.id, {}, { sweepFile: { name: "w.csv", type: "text/csv", bytes: sweepCsv({ scale: 0.9 }) } });
-    const estimated = await submitGoodReading(installer.client, module.id, { irradianceSource: "clear-sky-estimate", irradianceWm2: "" }, { sweepFile: { name: "e.csv", type: "text/csv", bytes: sweepCsv({ scale: 0.8 }) } });
+    const weaker = await submitGoodReading(
+      installer.client,
+      module.id,
+      {},
+      { sweepFile: { name: "w.csv", type: "text/csv", bytes: sweepCsv({ scale: 0.9 }) } },
+    );
+    const estimated = await submitGoodReading(
+      installer.client,
+      module.id,
+      { irradianceSource: "clear-sky-estimate", irradianceWm2: "" },
+      { sweepFile: { name: "e.csv", type: "text/csv", bytes: sweepCsv({ scale: 0.8 }) } },
+    );
     expect((await readingRow(estimated)).weight).toBe(0.5);
 
     const bulk = new FormData();
@@ -152,7 +193,10 @@ describe("moderation", () => {
     const after = await moduleRow(module.id);
     expect(after.verified_pmax_w).toBeCloseTo(expected, 9);
     expect(after.verified_reading_count).toBe(3);
-    for (const id of [measured, weaker, estimated]) expect(await db.selectFrom("reading_decision").select("reason").where("reading_id", "=", id).execute()).toEqual([{ reason: "Consistent with each other." }]);
+    for (const id of [measured, weaker, estimated])
+      expect(await db.selectFrom("reading_decision").select("reason").where("reading_id", "=", id).execute()).toEqual([
+        { reason: "Consistent with each other." },
+      ]);
   });
 
   it("lists the queue oldest first and marks an outlier against three approved readings", async () => {
@@ -160,10 +204,21 @@ describe("moderation", () => {
     const curator = await userWithRole("curator", "mod-curator-5");
     const module = await createTestModule("queue");
     const approved = [];
-    for (const scale of [0.98, 1.0, 1.02]) approved.push(await submitGoodReading(installer.client, module.id, {}, { sweepFile: { name: "a.csv", type: "text/csv", bytes: sweepCsv({ scale }) } }));
+    for (const scale of [0.98, 1.0, 1.02])
+      approved.push(await submitGoodReading(installer.client, module.id, {}, { sweepFile: { name: "a.csv", type: "text/csv", bytes: sweepCsv({ scale }) } }));
     for (const id of approved) await curator.client.action(review, "/review", { intent: "decide", readingId: id, decision: "approved", reason: "" });
-    const typical = await submitGoodReading(installer.client, module.id, {}, { sweepFile: { name: "t.csv", type: "text/csv", bytes: sweepCsv({ scale: 1.01 }) } });
-    const outlier = await submitGoodReading(installer.client, module.id, {}, { sweepFile: { name: "o.csv", type: "text/csv", bytes: sweepCsv({ scale: 0.7 }) } });
+    const typical = await submitGoodReading(
+      installer.client,
+      module.id,
+      {},
+      { sweepFile: { name: "t.csv", type: "text/csv", bytes: sweepCsv({ scale: 1.01 }) } },
+    );
+    const outlier = await submitGoodReading(
+      installer.client,
+      module.id,
+      {},
+      { sweepFile: { name: "o.csv", type: "text/csv", bytes: sweepCsv({ scale: 0.7 }) } },
+    );
 
     const mine = async () => {
       const pages = [];

@@ -16,7 +16,16 @@ describe("submitting a field reading", () => {
     expect(result.status, JSON.stringify(result.data)).toBe(302);
     const id = result.location!.replace("/readings/", "");
     const row = await db.selectFrom("field_reading").selectAll().where("id", "=", id).executeTakeFirstOrThrow();
-    expect(row).toMatchObject({ status: "pending", kind: "sweep", module_id: module.id, submitted_by: installer.userId, team_id: installer.teamId, irradiance_source: "pyranometer", weight: 1, utc_offset_min: 120 });
+    expect(row).toMatchObject({
+      status: "pending",
+      kind: "sweep",
+      module_id: module.id,
+      submitted_by: installer.userId,
+      team_id: installer.teamId,
+      irradiance_source: "pyranometer",
+      weight: 1,
+      utc_offset_min: 120,
+    });
     expect(new Date(row.taken_at).toISOString()).toBe("2026-06-14T11:10:00.000Z");
     expect(row.sweep).toHaveLength(60);
     expect(row.sweep_duration_s).toBeCloseTo(0.8, 9);
@@ -25,7 +34,11 @@ describe("submitting a field reading", () => {
     expect(row.stc_pmax_w).toBeCloseTo((row.measured_pmax_w * (1000 / 940)) / (1 - 0.004 * (row.cell_temp_c - 25)), 9);
     expect(row.fill_factor).toBeGreaterThan(0.6);
     expect(row.normalisation).toMatchObject({ method: "pmax-gamma", cellTempSource: "back-sheet", nameplatePmaxW: 100 });
-    const photo = await db.selectFrom("stored_file").select(["content_type", "byte_size", "sha256", "uploaded_by"]).where("id", "=", row.photo_id!).executeTakeFirstOrThrow();
+    const photo = await db
+      .selectFrom("stored_file")
+      .select(["content_type", "byte_size", "sha256", "uploaded_by"])
+      .where("id", "=", row.photo_id!)
+      .executeTakeFirstOrThrow();
     expect(photo).toMatchObject({ content_type: "image/png", uploaded_by: installer.userId });
     expect(photo.sha256).toMatch(/^[0-9a-f]{64}$/);
   });
@@ -33,7 +46,14 @@ describe("submitting a field reading", () => {
   it("stores one reading given as voltage and current, with the clear-sky estimate weighted half", async () => {
     const installer = await installerWithTeam("submit-single");
     const module = await createTestModule("single");
-    const fields = readingFields(module.id, { kind: "single", measuredVoltageV: "17.1", measuredCurrentA: "4.9", irradianceSource: "clear-sky-estimate", irradianceWm2: "", moduleTempC: "" });
+    const fields = readingFields(module.id, {
+      kind: "single",
+      measuredVoltageV: "17.1",
+      measuredCurrentA: "4.9",
+      irradianceSource: "clear-sky-estimate",
+      irradianceWm2: "",
+      moduleTempC: "",
+    });
     const result = await submitReading(installer.client, readingForm(fields));
     expect(result.status, JSON.stringify(result.data)).toBe(302);
     const row = await db.selectFrom("field_reading").selectAll().where("submitted_by", "=", installer.userId).executeTakeFirstOrThrow();
@@ -52,7 +72,12 @@ describe("submitting a field reading", () => {
       "sweepFile",
       /Row 3: current "five" is not a number/,
     ],
-    ["a sweep with one point", (id) => readingForm(readingFields(id), { sweepFile: { name: "s.csv", type: "text/csv", bytes: "voltage,current\n17.2,5.0\n" } }), "sweepFile", /1 points; at least 10/],
+    [
+      "a sweep with one point",
+      (id) => readingForm(readingFields(id), { sweepFile: { name: "s.csv", type: "text/csv", bytes: "voltage,current\n17.2,5.0\n" } }),
+      "sweepFile",
+      /1 points; at least 10/,
+    ],
     [
       "a photo that is really a text file",
       (id) => readingForm(readingFields(id), { photo: { name: "module.jpg", type: "image/jpeg", bytes: "Not a photo at all, just text pretending.\n" } }),
@@ -66,7 +91,12 @@ describe("submitting a field reading", () => {
       /larger than 5 MB/,
     ],
     ["no photo", (id) => readingForm(readingFields(id), { photo: null }), "photo", /Attach a photo/],
-    ["a sweep without a file", (id) => readingForm(readingFields(id), { sweepFile: { name: "", type: "application/octet-stream", bytes: "" } }), "sweepFile", /Attach the load sweep/],
+    [
+      "a sweep without a file",
+      (id) => readingForm(readingFields(id), { sweepFile: { name: "", type: "application/octet-stream", bytes: "" } }),
+      "sweepFile",
+      /Attach the load sweep/,
+    ],
     ["one reading without a power", (id) => readingForm(readingFields(id, { kind: "single" })), "measuredPmaxW", /Enter the power, or both/],
     ["measured irradiance left out", (id) => readingForm(readingFields(id, { irradianceWm2: "" })), "irradianceWm2", /Enter the measured irradiance/],
     ["a time in the future", (id) => readingForm(readingFields(id, { takenAtLocal: "2099-06-14T12:00" })), "takenAtLocal", /in the future/],
@@ -91,12 +121,27 @@ describe("submitting a field reading", () => {
     const form = readingForm(readingFields(module.id), { photo: { name: "huge.jpg", type: "image/jpeg", bytes: new Uint8Array(6 * MB).fill(0xd8) } });
     const body = await new Response(form).arrayBuffer();
     const contentType = new Response(form).headers.get("Content-Type")!;
-    const declared = await callRoute(readingsNew.action, authedRequest(installer.client, "/readings/new", { method: "POST", body, headers: { "Content-Type": contentType, "Content-Length": String(body.byteLength) } }));
+    const declared = await callRoute(
+      readingsNew.action,
+      authedRequest(installer.client, "/readings/new", {
+        method: "POST",
+        body,
+        headers: { "Content-Type": contentType, "Content-Length": String(body.byteLength) },
+      }),
+    );
     expect(declared.status).toBe(413);
     expect(declared.data.result.error.photo[0]).toMatch(/larger than 6 MB.*nothing was saved/);
     // Without a Content-Length (a streamed body), the count stops it too.
     const stream = new Blob([body]).stream();
-    const streamed = await callRoute(readingsNew.action, authedRequest(installer.client, "/readings/new", { method: "POST", body: stream, headers: { "Content-Type": contentType }, duplex: "half" } as RequestInit));
+    const streamed = await callRoute(
+      readingsNew.action,
+      authedRequest(installer.client, "/readings/new", {
+        method: "POST",
+        body: stream,
+        headers: { "Content-Type": contentType },
+        duplex: "half",
+      } as RequestInit),
+    );
     expect(streamed.status).toBe(413);
     expect(await countStored(installer.userId)).toEqual({ readings: 0, files: 0 });
   });
@@ -105,7 +150,10 @@ describe("submitting a field reading", () => {
     const module = await createTestModule("who");
     const curator = await userWithRole("curator", "submit-curator");
     expect((await submitReading(curator.client, readingForm(readingFields(module.id)))).status).toBe(403);
-    const anonymous = await callRoute(readingsNew.action, authedRequest(null, "/readings/new", { method: "POST", body: readingForm(readingFields(module.id)) }));
+    const anonymous = await callRoute(
+      readingsNew.action,
+      authedRequest(null, "/readings/new", { method: "POST", body: readingForm(readingFields(module.id)) }),
+    );
     expect(anonymous.status).toBe(302);
     expect(anonymous.location).toMatch(/^\/sign-in/);
   });

@@ -24,16 +24,41 @@ let teamId: string;
 beforeAll(async () => {
   await ensureDatabase(TEST_PG_PORT, SCRATCH, { fresh: true });
   // Migrations are TypeScript files: run them through tsx, as the test setup does.
-  execFileSync("node_modules/.bin/tsx", ["scripts/migrate.ts"], { env: { ...process.env, DATABASE_URL: databaseUrl(SCRATCH) }, stdio: ["ignore", "ignore", "inherit"] });
+  execFileSync("node_modules/.bin/tsx", ["scripts/migrate.ts"], {
+    env: { ...process.env, DATABASE_URL: databaseUrl(SCRATCH) },
+    stdio: ["ignore", "ignore", "inherit"],
+  });
   scratch = new Kysely<Database>({ dialect: new PostgresDialect({ pool: new pg.Pool({ connectionString: databaseUrl(SCRATCH), max: 2 }) }) });
   // The demo people and teams, written directly (the readings name their submitters by e-mail).
   const now = new Date();
   teamId = "team-tallowmere";
-  await scratch.insertInto("organization").values({ id: teamId, name: "Tallowmere Power Works", slug: "tallowmere-power-works", logo: null, createdAt: now, metadata: null }).execute();
+  await scratch
+    .insertInto("organization")
+    .values({ id: teamId, name: "Tallowmere Power Works", slug: "tallowmere-power-works", logo: null, createdAt: now, metadata: null })
+    .execute();
   for (const [i, person] of DEMO_USERS.entries()) {
     const userId = `user-${i}`;
-    await scratch.insertInto("user").values({ id: userId, name: person.name, email: person.email, emailVerified: true, image: null, createdAt: now, updatedAt: now, role: person.role, banned: false, banReason: null, banExpires: null }).execute();
-    if (person.team?.slug === "tallowmere-power-works") await scratch.insertInto("member").values({ id: `member-${i}`, organizationId: teamId, userId, role: person.team.membership, createdAt: now }).execute();
+    await scratch
+      .insertInto("user")
+      .values({
+        id: userId,
+        name: person.name,
+        email: person.email,
+        emailVerified: true,
+        image: null,
+        createdAt: now,
+        updatedAt: now,
+        role: person.role,
+        banned: false,
+        banReason: null,
+        banExpires: null,
+      })
+      .execute();
+    if (person.team?.slug === "tallowmere-power-works")
+      await scratch
+        .insertInto("member")
+        .values({ id: `member-${i}`, organizationId: teamId, userId, role: person.team.membership, createdAt: now })
+        .execute();
   }
   await seedDemoCatalogue(scratch, () => {});
   await seedDemoReadings(scratch, () => {});

@@ -44,7 +44,18 @@ export async function insertModule(maker: string, model: string, pmaxW: number, 
 export async function insertBattery(maker: string, model: string) {
   const row = await db
     .insertInto("battery")
-    .values({ maker, model, chemistry: "lifepo4", nominal_voltage_v: 12.8, capacity_ah: 100, capacity_hour_rate_h: 5, usable_dod_pct: 90, cycle_life: 4000, round_trip_efficiency_pct: 95, mass_kg: 12 })
+    .values({
+      maker,
+      model,
+      chemistry: "lifepo4",
+      nominal_voltage_v: 12.8,
+      capacity_ah: 100,
+      capacity_hour_rate_h: 5,
+      usable_dod_pct: 90,
+      cycle_life: 4000,
+      round_trip_efficiency_pct: 95,
+      mass_kg: 12,
+    })
     .returning("id")
     .executeTakeFirstOrThrow();
   return row.id;
@@ -66,7 +77,12 @@ export async function addOffer(client: RouteClient, form: Record<string, string>
   return result.location!.split("/").pop()!;
 }
 
-export async function callApi(mod: { loader?: Function; action?: Function }, kind: "loader" | "action", path: string, init: { headers?: Record<string, string>; body?: string; contentType?: string; params?: Record<string, string> } = {}) {
+export async function callApi(
+  mod: { loader?: Function; action?: Function },
+  kind: "loader" | "action",
+  path: string,
+  init: { headers?: Record<string, string>; body?: string; contentType?: string; params?: Record<string, string> } = {},
+) {
   const request = new Request(`http://127.0.0.1:3999${path}`, {
     method: kind === "action" ? "POST" : "GET",
     headers: { ...(init.contentType ? { "Content-Type": init.contentType } : {}), ...init.headers },

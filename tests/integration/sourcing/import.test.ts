@@ -12,7 +12,8 @@ import * as teamApiKeys from "~/routes/team-api-keys";
 import { db } from "~/server/db.server";
 import { todayIso } from "~/domain/sourcing/offer-validity";
 
-const HEADER = "supplier,kind,maker,model,sku,currency,unit_price,price_breaks,minimum_order,shipping_per_unit,shipping_per_order,lead_time_days,stock,valid_until,notes";
+const HEADER =
+  "supplier,kind,maker,model,sku,currency,unit_price,price_breaks,minimum_order,shipping_per_unit,shipping_per_order,lead_time_days,stock,valid_until,notes";
 
 async function counts(teamId: string) {
   const [suppliers, offers] = await Promise.all([
@@ -24,7 +25,12 @@ async function counts(teamId: string) {
 
 async function parts(label: string) {
   const maker = uniqueMaker(label);
-  return { maker, qp: await insertModule(maker, "QP-150P", 150, 126), fm: await insertModule(maker, "FM-120M", 120, 118.8), battery: await insertBattery(maker, "LFP-100") };
+  return {
+    maker,
+    qp: await insertModule(maker, "QP-150P", 150, 126),
+    fm: await insertModule(maker, "FM-120M", 120, 118.8),
+    battery: await insertBattery(maker, "LFP-100"),
+  };
 }
 
 function cleanCsv(maker: string) {
@@ -43,7 +49,14 @@ describe("offer CSV import", () => {
     const before = await counts(a.teamId);
     const check = await a.client.action(importRoute, "/sourcing/import", { intent: "check", csvText: cleanCsv(maker) });
     expect(check.status).toBe(200);
-    expect(check.data.report).toMatchObject({ rowCount: 3, readyCount: 3, problems: [], newSuppliers: [{ name: "Kestrel Row", currency: "EUR" }], newOffers: 3, updatedOffers: 0 });
+    expect(check.data.report).toMatchObject({
+      rowCount: 3,
+      readyCount: 3,
+      problems: [],
+      newSuppliers: [{ name: "Kestrel Row", currency: "EUR" }],
+      newOffers: 3,
+      updatedOffers: 0,
+    });
     expect(await counts(a.teamId)).toEqual(before);
 
     const done = await a.client.action(importRoute, "/sourcing/import", { intent: "import", csvText: cleanCsv(maker) });
@@ -57,7 +70,12 @@ describe("offer CSV import", () => {
       .where("pv_module.model", "=", "QP-150P")
       .executeTakeFirstOrThrow();
     expect(qp).toMatchObject({ unit_price: "57.45", minimum_order: 2, shipping_per_order: "35.00", currency: "EUR" });
-    const breaks = await db.selectFrom("offer_price_break").select(["min_quantity", "unit_price"]).where("offer_id", "=", qp.id).orderBy("min_quantity").execute();
+    const breaks = await db
+      .selectFrom("offer_price_break")
+      .select(["min_quantity", "unit_price"])
+      .where("offer_id", "=", qp.id)
+      .orderBy("min_quantity")
+      .execute();
     expect(breaks).toEqual([
       { min_quantity: 10, unit_price: "55.90" },
       { min_quantity: 40, unit_price: "54.40" },
@@ -91,7 +109,11 @@ describe("offer CSV import", () => {
     const report = check.data.report;
     expect(report.rowCount).toBe(6);
     expect(report.problems.map((p: { row: number }) => p.row)).toEqual([5, 6, 7]);
-    const messages = (row: number) => report.problems.find((p: { row: number }) => p.row === row).errors.map((e: { column: string; message: string }) => `${e.column}: ${e.message}`).join(" | ");
+    const messages = (row: number) =>
+      report.problems
+        .find((p: { row: number }) => p.row === row)
+        .errors.map((e: { column: string; message: string }) => `${e.column}: ${e.message}`)
+        .join(" | ");
     expect(messages(5)).toMatch(/model: No module ".* QP-999" in the catalogue/);
     expect(messages(6)).toMatch(/unit_price: The unit price must be a plain number/);
     expect(messages(7)).toMatch(new RegExp(`valid_until: The offer expired on 2020-01-31 \\(today is ${todayIso()}\\)`));
@@ -104,15 +126,24 @@ describe("offer CSV import", () => {
     // A repeated supplier and part inside one file is a problem too.
     const repeated = [...lines, `kestrel row,module,${maker},QP-150P,K-7,,50,,,,,,,,`].join("\n");
     const rep = await a.client.action(importRoute, "/sourcing/import", { intent: "check", csvText: repeated });
-    expect(rep.data.report.problems[0]).toMatchObject({ row: 5, errors: [{ column: "model", message: expect.stringMatching(/Row 2 already has an offer from kestrel row/) }] });
+    expect(rep.data.report.problems[0]).toMatchObject({
+      row: 5,
+      errors: [{ column: "model", message: expect.stringMatching(/Row 2 already has an offer from kestrel row/) }],
+    });
   });
 
   it("asks for a new supplier's currency, and warns when no rate converts it", async () => {
     const a = await installerWithTeam("imp-cur");
     const { maker } = await parts("cur");
-    const noCurrency = await a.client.action(importRoute, "/sourcing/import", { intent: "check", csvText: `${HEADER}\nNew Co,module,${maker},QP-150P,,,10,,,,,,,,` });
+    const noCurrency = await a.client.action(importRoute, "/sourcing/import", {
+      intent: "check",
+      csvText: `${HEADER}\nNew Co,module,${maker},QP-150P,,,10,,,,,,,,`,
+    });
     expect(noCurrency.data.report.problems[0].errors[0]).toMatchObject({ column: "currency", message: expect.stringMatching(/new supplier/) });
-    const gbp = await a.client.action(importRoute, "/sourcing/import", { intent: "check", csvText: `${HEADER}\nNew Co,module,${maker},QP-150P,,GBP,10,,,,,,,,` });
+    const gbp = await a.client.action(importRoute, "/sourcing/import", {
+      intent: "check",
+      csvText: `${HEADER}\nNew Co,module,${maker},QP-150P,,GBP,10,,,,,,,,`,
+    });
     expect(gbp.data.report.problems).toEqual([]);
     expect(gbp.data.report.warnings[0]).toMatch(/No GBP → EUR exchange rate/);
     // An existing supplier's currency is used when the row gives none.
@@ -140,12 +171,20 @@ describe("offer import API", () => {
     expect(await counts(a.teamId)).toEqual({ suppliers: 0, offers: 0 });
 
     const badBody = JSON.stringify({ csv: `${cleanCsv(maker)}\nKestrel Row,module,${maker},NOPE,,,1,,,,,,,,` });
-    const bad = await callApi(importApi, "action", "/api/v1/offers/import?dryRun=false", { body: badBody, contentType: "application/json", headers: auth(keyA) });
+    const bad = await callApi(importApi, "action", "/api/v1/offers/import?dryRun=false", {
+      body: badBody,
+      contentType: "application/json",
+      headers: auth(keyA),
+    });
     expect(bad.status).toBe(400);
     expect(bad.body.error.fields["rows.5.model"]).toMatch(/No module/);
     expect(await counts(a.teamId)).toEqual({ suppliers: 0, offers: 0 });
 
-    const written = await callApi(importApi, "action", "/api/v1/offers/import?dryRun=false", { body: cleanCsv(maker), contentType: "text/csv", headers: auth(keyA) });
+    const written = await callApi(importApi, "action", "/api/v1/offers/import?dryRun=false", {
+      body: cleanCsv(maker),
+      contentType: "text/csv",
+      headers: auth(keyA),
+    });
     expect(written.status).toBe(201);
     expect(await counts(a.teamId)).toEqual({ suppliers: 1, offers: 3 });
 
@@ -155,8 +194,13 @@ describe("offer import API", () => {
     expect(listB.body.items).toEqual([]);
     const supplierA = listA.body.items[0].supplier.id;
     expect((await callApi(offersApi, "loader", `/api/v1/offers?supplierId=${supplierA}`, { headers: auth(keyB) })).body.items).toEqual([]);
-    expect((await callApi(offersApi, "loader", "/api/v1/offers?kind=panels&quantity=0", { headers: auth(keyA) })).body.error.fields).toMatchObject({ kind: expect.any(String), quantity: expect.any(String) });
-    expect((await callApi(importApi, "action", "/api/v1/offers/import?dryRun=maybe", { body: "x", contentType: "text/csv", headers: auth(keyA) })).status).toBe(400);
+    expect((await callApi(offersApi, "loader", "/api/v1/offers?kind=panels&quantity=0", { headers: auth(keyA) })).body.error.fields).toMatchObject({
+      kind: expect.any(String),
+      quantity: expect.any(String),
+    });
+    expect((await callApi(importApi, "action", "/api/v1/offers/import?dryRun=maybe", { body: "x", contentType: "text/csv", headers: auth(keyA) })).status).toBe(
+      400,
+    );
     expect((await callApi(importApi, "action", "/api/v1/offers/import", { body: "x", contentType: "application/xml", headers: auth(keyA) })).status).toBe(415);
   });
 });

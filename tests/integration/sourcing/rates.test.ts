@@ -19,9 +19,18 @@ describe("quoting currency and rates", () => {
     const before = await a.client.loader(compare, "/sourcing/compare/modules?qty=5", { kind: "modules" });
     expect(before.data.comparison.rows[0]).toMatchObject({ landed: null, missingRate: expect.stringMatching(/No GBP → EUR rate/) });
 
-    expect((await a.client.action(rates, "/sourcing/rates", { intent: "add-rate", fromCurrency: "gbp", toCurrency: "EUR", rate: "1.15", asOf: "2026-01-05" })).status).toBe(302);
-    expect((await a.client.action(rates, "/sourcing/rates", { intent: "add-rate", fromCurrency: "GBP", toCurrency: "EUR", rate: "1.1725", asOf: "2026-02-01" })).status).toBe(302);
-    expect((await a.client.action(rates, "/sourcing/rates", { intent: "add-rate", fromCurrency: "GBP", toCurrency: "EUR", rate: "9.99", asOf: "2099-01-01" })).status).toBe(302);
+    expect(
+      (await a.client.action(rates, "/sourcing/rates", { intent: "add-rate", fromCurrency: "gbp", toCurrency: "EUR", rate: "1.15", asOf: "2026-01-05" }))
+        .status,
+    ).toBe(302);
+    expect(
+      (await a.client.action(rates, "/sourcing/rates", { intent: "add-rate", fromCurrency: "GBP", toCurrency: "EUR", rate: "1.1725", asOf: "2026-02-01" }))
+        .status,
+    ).toBe(302);
+    expect(
+      (await a.client.action(rates, "/sourcing/rates", { intent: "add-rate", fromCurrency: "GBP", toCurrency: "EUR", rate: "9.99", asOf: "2099-01-01" }))
+        .status,
+    ).toBe(302);
     // 5 × 40.00 + 10.00 = 210.00 GBP; × 1.1725 = 246.225 → 246.23 EUR (the 2099 rate is not yet in force).
     const after = await a.client.loader(compare, "/sourcing/compare/modules?qty=5", { kind: "modules" });
     expect(after.data.comparison.rows[0]).toMatchObject({
@@ -47,7 +56,13 @@ describe("quoting currency and rates", () => {
 
   it("names bad rates at their fields", async () => {
     const a = await installerWithTeam("rates-bad");
-    const result = await a.client.action(rates, "/sourcing/rates", { intent: "add-rate", fromCurrency: "EUR", toCurrency: "EUR", rate: "0", asOf: "yesterday" });
+    const result = await a.client.action(rates, "/sourcing/rates", {
+      intent: "add-rate",
+      fromCurrency: "EUR",
+      toCurrency: "EUR",
+      rate: "0",
+      asOf: "yesterday",
+    });
     expect(result.status).toBe(400);
     expect(result.data.intent).toBe("add-rate");
     const errors = result.data.result.error;

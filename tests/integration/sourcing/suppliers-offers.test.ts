@@ -23,12 +23,21 @@ describe("suppliers and offers", () => {
     const maker = uniqueMaker("iso");
     const moduleId = await insertModule(maker, "QP-1", 150, 126);
     const supplierId = await addSupplier(a.client, "Valley Wholesale", "EUR", { defaultShippingPerOrder: "25.00", defaultLeadTimeDays: "3" });
-    const offerId = await addOffer(a.client, offerForm(supplierId, moduleId, { "priceBreaks[0].minQuantity": "10", "priceBreaks[0].unitPrice": "55.20", validUntil: "2099-12-31" }));
+    const offerId = await addOffer(
+      a.client,
+      offerForm(supplierId, moduleId, { "priceBreaks[0].minQuantity": "10", "priceBreaks[0].unitPrice": "55.20", validUntil: "2099-12-31" }),
+    );
 
     const page = await a.client.loader(offerPage, `/sourcing/offers/${offerId}`, { offerId });
     expect(page.status).toBe(200);
     // Blank shipping and lead time took the supplier's defaults; money came back exactly as typed.
-    expect(page.data.form).toMatchObject({ unitPrice: "58.50", shippingPerOrder: "25.00", shippingPerUnit: "0", leadTimeDays: 3, priceBreaks: [{ minQuantity: 10, unitPrice: "55.20" }] });
+    expect(page.data.form).toMatchObject({
+      unitPrice: "58.50",
+      shippingPerOrder: "25.00",
+      shippingPerUnit: "0",
+      leadTimeDays: 3,
+      priceBreaks: [{ minQuantity: 10, unitPrice: "55.20" }],
+    });
     // Landed at 10: 10 × 55.20 + 25.00 = 577.00
     const ten = page.data.preview.find((r: { quantity: number }) => r.quantity === 10);
     expect(ten.total).toEqual({ amount: "577.00", currency: "EUR" });
@@ -42,7 +51,9 @@ describe("suppliers and offers", () => {
     expect((await b.client.action(supplierPage, `/sourcing/suppliers/${supplierId}`, { intent: "delete" }, { supplierId })).status).toBe(404);
     expect((await b.client.loader(offerPage, `/sourcing/offers/${offerId}`, { offerId })).status).toBe(404);
     expect((await b.client.action(offerPage, `/sourcing/offers/${offerId}`, { intent: "delete" }, { offerId })).status).toBe(404);
-    expect((await b.client.action(offerPage, `/sourcing/offers/${offerId}`, offerForm(supplierId, moduleId, { unitPrice: "1" }), { offerId })).status).toBe(404);
+    expect((await b.client.action(offerPage, `/sourcing/offers/${offerId}`, offerForm(supplierId, moduleId, { unitPrice: "1" }), { offerId })).status).toBe(
+      404,
+    );
     expect((await b.client.loader(offerPage, "/sourcing/offers/not-a-uuid", { offerId: "not-a-uuid" })).status).toBe(404);
     const compareB = await b.client.loader(compare, "/sourcing/compare/modules", { kind: "modules" });
     expect(compareB.data.comparison.rows).toHaveLength(0);
@@ -59,11 +70,22 @@ describe("suppliers and offers", () => {
     // The API: B's key gets 404 for A's offer and an empty list; A's key gets the offer with its landed cost.
     const keyA = (await a.client.action(teamApiKeys, "/team/api-keys", { intent: "create", name: "Team A sync" })).data.created.key;
     const keyB = (await b.client.action(teamApiKeys, "/team/api-keys", { intent: "create", name: "Team B sync" })).data.created.key;
-    expect((await callApi(offerApi, "loader", `/api/v1/offers/${offerId}`, { headers: { Authorization: `Bearer ${keyB}` }, params: { offerId } })).status).toBe(404);
-    expect((await callApi(offersApi, "loader", `/api/v1/offers?supplierId=${supplierId}`, { headers: { Authorization: `Bearer ${keyB}` } })).body.items).toEqual([]);
-    const mine = await callApi(offerApi, "loader", `/api/v1/offers/${offerId}?quantity=10`, { headers: { Authorization: `Bearer ${keyA}` }, params: { offerId } });
+    expect((await callApi(offerApi, "loader", `/api/v1/offers/${offerId}`, { headers: { Authorization: `Bearer ${keyB}` }, params: { offerId } })).status).toBe(
+      404,
+    );
+    expect(
+      (await callApi(offersApi, "loader", `/api/v1/offers?supplierId=${supplierId}`, { headers: { Authorization: `Bearer ${keyB}` } })).body.items,
+    ).toEqual([]);
+    const mine = await callApi(offerApi, "loader", `/api/v1/offers/${offerId}?quantity=10`, {
+      headers: { Authorization: `Bearer ${keyA}` },
+      params: { offerId },
+    });
     expect(mine.status).toBe(200);
-    expect(mine.body).toMatchObject({ id: offerId, unitPrice: "58.50", landed: { quantityBought: 10, total: { amount: "577.00", currency: "EUR" }, rate: null } });
+    expect(mine.body).toMatchObject({
+      id: offerId,
+      unitPrice: "58.50",
+      landed: { quantityBought: 10, total: { amount: "577.00", currency: "EUR" }, rate: null },
+    });
     const row = await db.selectFrom("offer").select(["team_id", "unit_price"]).where("id", "=", offerId).executeTakeFirstOrThrow();
     expect(row).toEqual({ team_id: a.teamId, unit_price: "58.50" });
   });

@@ -10,7 +10,14 @@ describe("money", () => {
     // 0.1 + 0.2 = 0.3 exactly in decimal (a float gives 0.30000000000000004).
     expect(moneyText(addMoney(money("0.1", "EUR"), money("0.2", "EUR")))).toBe("0.30");
     // 1000 × 0.07 = 70.00
-    expect(moneyText(sumMoney(Array.from({ length: 1000 }, () => money("0.07", "EUR")), "EUR"))).toBe("70.00");
+    expect(
+      moneyText(
+        sumMoney(
+          Array.from({ length: 1000 }, () => money("0.07", "EUR")),
+          "EUR",
+        ),
+      ),
+    ).toBe("70.00");
   });
 
   it("rounds half away from zero to the currency's minor unit (ISO 4217 exponents)", () => {

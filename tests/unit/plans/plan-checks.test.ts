@@ -60,7 +60,10 @@ describe("PlanChecks", () => {
   });
 
   it("ignores an override without a reason", () => {
-    const html = markup(PlanChecks, { checks: failing.checks, overrides: [{ checkId: "array.voc-cold", reason: "   ", byName: "Maren Oakes", at: "2026-12-01" }] });
+    const html = markup(PlanChecks, {
+      checks: failing.checks,
+      overrides: [{ checkId: "array.voc-cold", reason: "   ", byName: "Maren Oakes", at: "2026-12-01" }],
+    });
     expect(html).not.toContain("Accepted anyway");
     expect(textOf(html)).toContain("1 failing safety check stops");
   });

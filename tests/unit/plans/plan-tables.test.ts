@@ -20,8 +20,12 @@ function row(html: string, attribute: string): string {
 describe("PartsList", () => {
   it("lists each part with its quantity, catalogue name and figures", () => {
     const html = markup(PartsList, { plan: passing, labels, parts: passingPlanInput().parts });
-    expect(row(html, 'data-testid="part-module"')).toMatch(new RegExp(`^${passing.array.layout.moduleCount} PV modules Vell Ridge 100 100 W at STC each \\(nameplate\\)`));
-    expect(row(html, 'data-testid="part-battery"')).toContain(`${passing.battery.batteryCount} Batteries Cobble AGM 200 AGM lead-acid, 12 V, 200 Ah (20 h rate) each`);
+    expect(row(html, 'data-testid="part-module"')).toMatch(
+      new RegExp(`^${passing.array.layout.moduleCount} PV modules Vell Ridge 100 100 W at STC each \\(nameplate\\)`),
+    );
+    expect(row(html, 'data-testid="part-battery"')).toContain(
+      `${passing.battery.batteryCount} Batteries Cobble AGM 200 AGM lead-acid, 12 V, 200 Ah (20 h rate) each`,
+    );
     expect(row(html, 'data-testid="part-controller"')).toContain("MPPT, up to 100 V in, 30 A out");
     expect(row(html, 'data-testid="part-inverter"')).toContain("1 Inverter Hearth 1000 1,000 W continuous, 2,000 W surge");
   });
@@ -68,7 +72,12 @@ describe("LayoutOptions", () => {
   });
 
   it("shows a layout set by hand, with the plain reason it is not valid and the controller's limit", () => {
-    const html = markup(LayoutOptions, { layouts: failing.array.layouts, chosen: failing.array.layout, forced: true, controller: { maxPvVocV: 100, maxChargeCurrentA: 30 } });
+    const html = markup(LayoutOptions, {
+      layouts: failing.array.layouts,
+      chosen: failing.array.layout,
+      forced: true,
+      controller: { maxPvVocV: 100, maxChargeCurrentA: 30 },
+    });
     const chosen = row(html, 'data-chosen="true"');
     expect(chosen).toContain("◆ Chosen (set by hand)");
     expect(chosen).toContain("101.7 V ≤ 100.0 V ✕ over limit");

@@ -54,7 +54,11 @@ describe("normaliseReading", () => {
 
   it("estimates the cell temperature from air with the NOCT model when no back-sheet reading exists", () => {
     // REFERENCES.md: Tc = Ta + (NOCT − 20)/800·G; G = 1000, Ta = 30, NOCT = 50 → 67.5 °C.
-    const reading = ok(normaliseReading(input({ moduleTempC: null, airTempC: 30, irradiance: { source: "pyranometer", irradianceWm2: 1000 }, measured: { kind: "single", pmaxW: 87 } })));
+    const reading = ok(
+      normaliseReading(
+        input({ moduleTempC: null, airTempC: 30, irradiance: { source: "pyranometer", irradianceWm2: 1000 }, measured: { kind: "single", pmaxW: 87 } }),
+      ),
+    );
     expect(reading.cellTempC).toBeCloseTo(67.5, 10);
     expect(reading.stcPmaxW).toBeCloseTo(87 / (1 - 0.003 * 42.5), 10);
     expect(reading.working.cellTempSource).toBe("air-noct");
@@ -63,7 +67,14 @@ describe("normaliseReading", () => {
 
   it("uses the clear-sky estimate for that time, place and plane, flags it and weights it half", () => {
     const reading = ok(normaliseReading(input({ irradiance: { source: "clear-sky-estimate" } })));
-    const clearSky = clearSkyPlaneOfArrayAt({ instantUtc: SPA.takenAtUtc, latitudeDeg: SPA.latitudeDeg, longitudeDeg: SPA.longitudeDeg, tiltDeg: 30, azimuthDeg: 170, albedo: 0.2 });
+    const clearSky = clearSkyPlaneOfArrayAt({
+      instantUtc: SPA.takenAtUtc,
+      latitudeDeg: SPA.latitudeDeg,
+      longitudeDeg: SPA.longitudeDeg,
+      tiltDeg: 30,
+      azimuthDeg: 170,
+      albedo: 0.2,
+    });
     expect(reading.irradianceWm2).toBeCloseTo(clearSky.poaWm2, 10);
     expect(reading.irradianceSource).toBe("clear-sky-estimate");
     expect(reading.weight).toBe(0.5);
@@ -89,10 +100,13 @@ describe("evaluateReading with a load sweep", () => {
   const curve = explicitIvModel({ vocV: 21.0, iscA: 5.3, vmpV: 17.0, impA: 4.9 });
   const truth = modelMaximumPowerW(curve);
   const csv = (count: number, seconds: number) =>
-    ["voltage (V),current (A),time (s)", ...Array.from({ length: count }, (_, i) => {
-      const v = (21.0 * i) / (count - 1);
-      return `${v.toFixed(4)},${currentAtVoltageA(curve, v).toFixed(5)},${((seconds * i) / (count - 1)).toFixed(3)}`;
-    })].join("\n");
+    [
+      "voltage (V),current (A),time (s)",
+      ...Array.from({ length: count }, (_, i) => {
+        const v = (21.0 * i) / (count - 1);
+        return `${v.toFixed(4)},${currentAtVoltageA(curve, v).toFixed(5)},${((seconds * i) / (count - 1)).toFixed(3)}`;
+      }),
+    ].join("\n");
   const conditions: ReadingConditions = {
     kind: "sweep",
     takenAtLocal: "2003-10-17T12:30:30",
@@ -125,8 +139,16 @@ describe("evaluateReading with a load sweep", () => {
   });
 
   it("sends the engine's reason for an unusable sweep to the file field", () => {
-    expect(evaluateReading(conditions, MODULE, { csv: "voltage,current\n12,3\n" })).toMatchObject({ ok: false, field: "sweepFile", message: expect.stringMatching(/1 points; at least 10/) });
-    expect(evaluateReading(conditions, MODULE, { csv: "voltage,current\n12,three\n" })).toMatchObject({ ok: false, field: "sweepFile", message: expect.stringMatching(/Row 2/) });
+    expect(evaluateReading(conditions, MODULE, { csv: "voltage,current\n12,3\n" })).toMatchObject({
+      ok: false,
+      field: "sweepFile",
+      message: expect.stringMatching(/1 points; at least 10/),
+    });
+    expect(evaluateReading(conditions, MODULE, { csv: "voltage,current\n12,three\n" })).toMatchObject({
+      ok: false,
+      field: "sweepFile",
+      message: expect.stringMatching(/Row 2/),
+    });
     expect(evaluateReading(conditions, MODULE, null)).toMatchObject({ ok: false, field: "sweepFile" });
   });
 

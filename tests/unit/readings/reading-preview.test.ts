@@ -26,9 +26,17 @@ describe("reading preview", () => {
       state: "incomplete",
       missing: ["module", "sweep CSV", "time of the reading", "UTC offset", "latitude", "longitude", "tilt", "azimuth", "air temperature", "irradiance source"],
     });
-    expect(previewReading({ ...FILLED, measuredPmaxW: "", irradianceWm2: "" }, null, MODULE, NOW)).toEqual({ state: "incomplete", missing: ["measured power (or voltage and current)", "measured irradiance"] });
+    expect(previewReading({ ...FILLED, measuredPmaxW: "", irradianceWm2: "" }, null, MODULE, NOW)).toEqual({
+      state: "incomplete",
+      missing: ["measured power (or voltage and current)", "measured irradiance"],
+    });
     // Voltage and current stand in for the power; a clear-sky estimate needs no irradiance.
-    const byVi = previewReading({ ...FILLED, measuredPmaxW: "", measuredVoltageV: "17", measuredCurrentA: "4.7", irradianceSource: "clear-sky-estimate", irradianceWm2: "" }, null, MODULE, NOW);
+    const byVi = previewReading(
+      { ...FILLED, measuredPmaxW: "", measuredVoltageV: "17", measuredCurrentA: "4.7", irradianceSource: "clear-sky-estimate", irradianceWm2: "" },
+      null,
+      MODULE,
+      NOW,
+    );
     expect(byVi.state).toBe("ok");
   });
 

@@ -6,7 +6,13 @@ import { combinedUncertaintyPct, readingWeight, uncertaintyTerms } from "~/domai
 
 describe("reading uncertainty", () => {
   it("combines a pyranometer, a back-sheet thermometer and a sweep in quadrature", () => {
-    const terms = uncertaintyTerms({ irradianceSource: "pyranometer", irradianceWm2: 950, cellTemperatureSource: "back-sheet", gammaPmaxPctPerC: -0.4, measurementKind: "sweep" });
+    const terms = uncertaintyTerms({
+      irradianceSource: "pyranometer",
+      irradianceWm2: 950,
+      cellTemperatureSource: "back-sheet",
+      gammaPmaxPctPerC: -0.4,
+      measurementKind: "sweep",
+    });
     expect(terms.map((t) => [t.code, t.pct])).toEqual([
       ["irradiance", 3],
       ["cell-temperature", 0.8], // 0.4 %/°C × 2 °C
@@ -16,7 +22,13 @@ describe("reading uncertainty", () => {
   });
 
   it("grows with a clear-sky estimate, an air-temperature estimate, one point and low light", () => {
-    const terms = uncertaintyTerms({ irradianceSource: "clear-sky-estimate", irradianceWm2: 450, cellTemperatureSource: "air-noct", gammaPmaxPctPerC: -0.44, measurementKind: "single" });
+    const terms = uncertaintyTerms({
+      irradianceSource: "clear-sky-estimate",
+      irradianceWm2: 450,
+      cellTemperatureSource: "air-noct",
+      gammaPmaxPctPerC: -0.44,
+      measurementKind: "single",
+    });
     expect(terms.map((t) => t.code)).toEqual(["irradiance", "cell-temperature", "power", "low-irradiance"]);
     expect(terms[1].pct).toBeCloseTo(0.44 * 8, 12);
     // √(12² + 3.52² + 3² + 3²) = √174.39 = 13.206
@@ -25,7 +37,15 @@ describe("reading uncertainty", () => {
 
   it("puts a reference cell between a pyranometer and an estimate", () => {
     const pct = (source: "pyranometer" | "reference-cell" | "clear-sky-estimate") =>
-      combinedUncertaintyPct(uncertaintyTerms({ irradianceSource: source, irradianceWm2: 900, cellTemperatureSource: "back-sheet", gammaPmaxPctPerC: -0.35, measurementKind: "sweep" }));
+      combinedUncertaintyPct(
+        uncertaintyTerms({
+          irradianceSource: source,
+          irradianceWm2: 900,
+          cellTemperatureSource: "back-sheet",
+          gammaPmaxPctPerC: -0.35,
+          measurementKind: "sweep",
+        }),
+      );
     expect(pct("pyranometer")).toBeLessThan(pct("reference-cell"));
     expect(pct("reference-cell")).toBeLessThan(pct("clear-sky-estimate"));
   });

@@ -58,7 +58,13 @@ describe("battery bank for autonomy, depth of discharge and temperature", () => 
     expect([one.seriesExact, one.batteriesInSeries]).toEqual([true, 1]);
     const two = sizeBatteryBank({ battery: { ...lfp12V, nominalVoltageV: 12.8 }, systemVoltageV: 24, dailyLoadWh: 1000, autonomyDays: 1, batteryTempC: 20 });
     expect([two.seriesExact, two.batteriesInSeries]).toEqual([true, 2]);
-    const tooHigh = sizeBatteryBank({ battery: { ...lfp12V, nominalVoltageV: 51.2 }, systemVoltageV: 24, dailyLoadWh: 1000, autonomyDays: 1, batteryTempC: 20 });
+    const tooHigh = sizeBatteryBank({
+      battery: { ...lfp12V, nominalVoltageV: 51.2 },
+      systemVoltageV: 24,
+      dailyLoadWh: 1000,
+      autonomyDays: 1,
+      batteryTempC: 20,
+    });
     expect(tooHigh.seriesExact).toBe(false);
   });
 

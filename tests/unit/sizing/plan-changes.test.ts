@@ -14,7 +14,9 @@ describe("what changed since a plan was saved", () => {
 
   it("ignores key order and absent keys, as a snapshot read back from jsonb has them", () => {
     const input = base();
-    const reordered = JSON.parse(JSON.stringify({ appliances: input.appliances, parts: input.parts, site: input.site, design: input.design, systemVoltageV: input.systemVoltageV }));
+    const reordered = JSON.parse(
+      JSON.stringify({ appliances: input.appliances, parts: input.parts, site: input.site, design: input.design, systemVoltageV: input.systemVoltageV }),
+    );
     const reversedSite = Object.fromEntries(Object.entries(reordered.site).reverse());
     expect(describeInputChanges(input, { ...reordered, site: reversedSite })).toEqual([]);
   });

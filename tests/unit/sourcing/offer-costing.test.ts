@@ -65,7 +65,14 @@ describe("costing an offer for a quantity", () => {
   });
 
   it("adds 0.1 and 0.2 exactly: one unit at 0.10 with 0.20 shipping lands at 0.30, ten at 3.00", () => {
-    const terms: OfferTerms = { currency: "EUR", unitPrice: new Decimal("0.1"), breaks: [], minimumOrder: 1, shippingPerUnit: new Decimal("0.2"), shippingPerOrder: new Decimal(0) };
+    const terms: OfferTerms = {
+      currency: "EUR",
+      unitPrice: new Decimal("0.1"),
+      breaks: [],
+      minimumOrder: 1,
+      shippingPerUnit: new Decimal("0.2"),
+      shippingPerOrder: new Decimal(0),
+    };
     expect(costOffer(terms, 1, pricing([])).totalQuoting!.amount.toFixed(2)).toBe("0.30");
     expect(costOffer(terms, 1, pricing([])).totalQuoting!.amount.eq("0.3")).toBe(true);
     // A float would give 0.1 + 0.2 = 0.30000000000000004 and 10 × 0.1 + 10 × 0.2 = 3.0000000000000004.

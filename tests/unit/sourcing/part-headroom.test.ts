@@ -30,7 +30,10 @@ describe("controller headroom", () => {
 
 describe("inverter headroom", () => {
   it("1500 W continuous for an 800 W peak: 46.7 %; a 12 V inverter on a 24 V bank does not match", () => {
-    expect(inverterHeadroom({ continuousW: 1500, dcInputVoltageV: 24 }, 800, 24)).toEqual({ voltageMatches: true, continuousHeadroomPct: expect.closeTo(46.667, 3) });
+    expect(inverterHeadroom({ continuousW: 1500, dcInputVoltageV: 24 }, 800, 24)).toEqual({
+      voltageMatches: true,
+      continuousHeadroomPct: expect.closeTo(46.667, 3),
+    });
     expect(inverterHeadroom({ continuousW: 1500, dcInputVoltageV: 12 }, 800, 24).voltageMatches).toBe(false);
   });
 });

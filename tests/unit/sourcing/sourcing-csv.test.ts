@@ -3,11 +3,15 @@
 import { describe, expect, it } from "vitest";
 import { checkOfferCsv, offersToCsv } from "~/lib/sourcing-csv";
 
-const HEADER = "supplier,kind,maker,model,sku,currency,unit_price,price_breaks,minimum_order,shipping_per_unit,shipping_per_order,lead_time_days,stock,valid_until,notes";
+const HEADER =
+  "supplier,kind,maker,model,sku,currency,unit_price,price_breaks,minimum_order,shipping_per_unit,shipping_per_order,lead_time_days,stock,valid_until,notes";
 
 describe("checking an offer CSV", () => {
   it("reads good rows with their money as text", () => {
-    const check = checkOfferCsv(`${HEADER}\nKestrel Row,module,Quillon Photonics,QP-150P,KR-1,eur,57.90,10:56.00; 40:54.20,2,0.80,35.00,6,40,2027-03-31,\n`, "2026-12-01");
+    const check = checkOfferCsv(
+      `${HEADER}\nKestrel Row,module,Quillon Photonics,QP-150P,KR-1,eur,57.90,10:56.00; 40:54.20,2,0.80,35.00,6,40,2027-03-31,\n`,
+      "2026-12-01",
+    );
     expect(check.fileErrors).toEqual([]);
     expect(check.problems).toEqual([]);
     expect(check.rows).toHaveLength(1);
@@ -43,7 +47,12 @@ describe("checking an offer CSV", () => {
     const byRow = Object.fromEntries(check.problems.map((p) => [p.row, p.errors.map((e) => `${e.column}: ${e.message}`)]));
     expect(Object.keys(byRow)).toEqual(["3", "4", "6", "7"]);
     expect(byRow[3].join(" ")).toMatch(/price_breaks: Write price breaks as quantity:price pairs/);
-    expect(byRow[4]).toEqual(expect.arrayContaining([expect.stringMatching(/^kind: Unknown kind "panel"/), expect.stringMatching(/^unit_price: The unit price must be a plain number/)]));
+    expect(byRow[4]).toEqual(
+      expect.arrayContaining([
+        expect.stringMatching(/^kind: Unknown kind "panel"/),
+        expect.stringMatching(/^unit_price: The unit price must be a plain number/),
+      ]),
+    );
     expect(byRow[6].join(" | ")).toMatch(/currency: "EURO" is not a three-letter/);
     expect(byRow[6].join(" | ")).toMatch(/price_breaks: The break quantity must be at least 2/);
     expect(byRow[6].join(" | ")).toMatch(/minimum_order: The minimum order must be at least 1/);
@@ -84,13 +93,21 @@ describe("exporting offers", () => {
         leadTimeDays: null,
         stock: 3,
         validUntil: "2027-01-31",
-        notes: "=HYPERLINK(\"x\")",
+        notes: '=HYPERLINK("x")',
       },
     ]);
     expect(csv.split("\r\n")[0]).toBe(HEADER);
     const back = checkOfferCsv(csv, "2026-12-01");
     expect(back.problems).toEqual([]);
-    expect(back.rows[0]).toMatchObject({ supplier: "Kestrel Row, Ltd", kind: "batteries", unitPrice: "0.1", shippingPerUnit: "0.2", priceBreaks: [{ minQuantity: 4, unitPrice: "0.0999" }], stock: 3, leadTimeDays: null });
+    expect(back.rows[0]).toMatchObject({
+      supplier: "Kestrel Row, Ltd",
+      kind: "batteries",
+      unitPrice: "0.1",
+      shippingPerUnit: "0.2",
+      priceBreaks: [{ minQuantity: 4, unitPrice: "0.0999" }],
+      stock: 3,
+      leadTimeDays: null,
+    });
     // A cell that a spreadsheet would run as a formula is written as text.
     expect(back.rows[0].notes.startsWith("'=")).toBe(true);
   });

@@ -35,7 +35,13 @@ export function TemperatureFields({ fields }: { fields: ConditionFields }) {
   return (
     <div className="grid gap-3 sm:grid-cols-2">
       <UnitField field={fields.airTempC} label="Air temperature" unit="°C" hint="In the shade, near the module." />
-      <UnitField field={fields.moduleTempC} label="Back-sheet temperature" unit="°C" optional hint="A thermometer on the back of the module, behind a cell. Without it the cell temperature is estimated." />
+      <UnitField
+        field={fields.moduleTempC}
+        label="Back-sheet temperature"
+        unit="°C"
+        optional
+        hint="A thermometer on the back of the module, behind a cell. Without it the cell temperature is estimated."
+      />
     </div>
   );
 }
@@ -63,11 +69,16 @@ export function IrradianceFields({ fields, source, onSource }: { fields: Conditi
       </fieldset>
       {source === "clear-sky-estimate" ? (
         <p className="rounded-md border border-rule bg-paper px-3 py-2 text-sm text-ink-soft">
-          The engine estimates the irradiance on the module's plane for that time, place and orientation under a clear sky (Haurwitz 1945). Haze or thin cloud make the real value
-          lower, so the reading is marked as estimated and counts half.
+          The engine estimates the irradiance on the module's plane for that time, place and orientation under a clear sky (Haurwitz 1945). Haze or thin cloud
+          make the real value lower, so the reading is marked as estimated and counts half.
         </p>
       ) : (
-        <UnitField field={fields.irradianceWm2} label="Irradiance in the module's plane" unit="W/m²" hint="Sensor held at the module's tilt and azimuth, read during the sweep." />
+        <UnitField
+          field={fields.irradianceWm2}
+          label="Irradiance in the module's plane"
+          unit="W/m²"
+          hint="Sensor held at the module's tilt and azimuth, read during the sweep."
+        />
       )}
     </div>
   );

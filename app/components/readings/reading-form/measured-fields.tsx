@@ -69,9 +69,9 @@ export function MeasuredFields({
               className="block w-full text-sm file:mr-3 file:rounded-md file:border file:border-rule file:bg-paper-deep file:px-3 file:py-1.5"
             />
             <p className="mt-1 text-xs text-ink-faint">
-              Columns: <code>voltage</code> in volts (V) and <code>current</code> in amperes (A), one row per point; mV and mA are accepted when the header says so, e.g.{" "}
-              <code>voltage (mV)</code>. An optional <code>time (s)</code> column gives the sweep's duration. Without a header row, column 1 is volts and column 2
-              amperes. At most {SWEEP_MAX_POINTS} points, {SWEEP_CSV_MAX_BYTES / 1024} KB.
+              Columns: <code>voltage</code> in volts (V) and <code>current</code> in amperes (A), one row per point; mV and mA are accepted when the header says
+              so, e.g. <code>voltage (mV)</code>. An optional <code>time (s)</code> column gives the sweep's duration. Without a header row, column 1 is volts
+              and column 2 amperes. At most {SWEEP_MAX_POINTS} points, {SWEEP_CSV_MAX_BYTES / 1024} KB.
             </p>
             <FieldError id={fields.sweepFile.errorId} errors={fields.sweepFile.errors} />
           </div>

@@ -5,11 +5,7 @@ import type { ReadingPreview } from "~/lib/reading-preview";
 
 export function PreviewPanel({ preview, nameplatePmaxW }: { preview: ReadingPreview; nameplatePmaxW: number | null }) {
   if (preview.state === "incomplete") {
-    return (
-      <p className="text-sm text-ink-soft">
-        The result appears here as you fill in the form. Still needed: {preview.missing.join(", ")}.
-      </p>
-    );
+    return <p className="text-sm text-ink-soft">The result appears here as you fill in the form. Still needed: {preview.missing.join(", ")}.</p>;
   }
   if (preview.state === "error") {
     return (
