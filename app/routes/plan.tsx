@@ -110,9 +110,14 @@ export default function PlanPage({ loaderData, actionData }: Route.ComponentProp
         }
         actions={
           l.isLatest ? (
-            <Link to={`/plans/${l.planId}/alternatives`} className="text-sm font-medium text-copper underline">
-              Cheaper kits from your offers →
-            </Link>
+            <span className="flex flex-col items-end gap-1">
+              <Link to={`/plans/${l.planId}/alternatives`} className="text-sm font-medium text-copper underline">
+                Cheaper kits from your offers →
+              </Link>
+              <Link to={`/sourcing/compare/modules?plan=${l.planId}`} className="text-sm text-ink-soft underline">
+                Compare offers for this plan →
+              </Link>
+            </span>
           ) : undefined
         }
       />

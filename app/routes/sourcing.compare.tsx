@@ -2,7 +2,7 @@
 // batteries per usable and per cycled kWh, controllers and inverters by headroom, all with the landed
 // cost for the quantity in the quoting currency. What to compare for sits in the URL (and, once kit
 // plans exist, can come from a plan), as does the sort.
-import { Link, useSearchParams, type ShouldRevalidateFunctionArgs } from "react-router";
+import { Link, redirect, useSearchParams, type ShouldRevalidateFunctionArgs } from "react-router";
 import type { Route } from "./+types/sourcing.compare";
 import { PageHeader, Panel } from "~/components/page-header";
 import { CompareTable, type SortChoice } from "~/components/sourcing/compare-table";
@@ -22,6 +22,8 @@ import type { ModuleComparisonRow } from "~/domain/sourcing/module-rows";
 import { isOfferPartKind, OFFER_PART_KINDS, type OfferPartKind } from "~/domain/sourcing/offer-facts";
 import type { BatteryComparisonRow, ControllerComparisonRow, InverterComparisonRow } from "~/domain/sourcing/part-rows";
 import { needFromSearchParams } from "~/lib/sourcing-compare-need";
+import { needFromPlan } from "~/domain/sourcing/plan-need";
+import { findPlan } from "~/server/plans/plans.server";
 import { db } from "~/server/db.server";
 import { requireTeamMember } from "~/server/guards.server";
 import { compareOffers } from "~/server/sourcing/comparison.server";
@@ -36,9 +38,27 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   const { team } = await requireTeamMember(request);
   if (!isOfferPartKind(params.kind)) throw new Response("There is no such kind of part to compare.", { status: 404 });
   const url = new URL(request.url);
+  const planId = url.searchParams.get("plan");
+  const plan = planId ? await findPlan(team.teamId, planId) : undefined;
+  if (planId && !plan) throw new Response("No such plan in your team.", { status: 404 });
+  if (plan && !url.searchParams.has("filled")) {
+    // Fill the comparison's fields from the plan once, then keep them in the address like typed ones.
+    const fromPlan = needFromPlan(plan.revision.result);
+    const next = new URLSearchParams(url.searchParams);
+    const set = (key: string, value: number | null, digits = 2) => (value === null ? next.delete(key) : next.set(key, String(Number(value.toFixed(digits)))));
+    set("energy", fromPlan.energy, 3);
+    set("sun", fromPlan.sun);
+    set("losses", fromPlan.losses, 1);
+    set("bank", fromPlan.bank, 0);
+    set("array", fromPlan.array, 0);
+    set("peak", fromPlan.peak, 0);
+    set("qty", params.kind === "batteries" ? fromPlan.batteries : params.kind === "modules" ? null : 1, 0);
+    next.set("filled", "1");
+    throw redirect(`${url.pathname}?${next}`);
+  }
   const { need, values, errors } = needFromSearchParams(params.kind, url.searchParams);
   const comparison = await compareOffers(db, team.teamId, params.kind, need);
-  return { kind: params.kind, values, errors, comparison };
+  return { kind: params.kind, values, errors, comparison, plan: plan ? { id: plan.plan.id, name: plan.plan.name } : null };
 }
 
 /** Sorting happens in the browser: a change of sort alone needs no new data. */
@@ -81,7 +101,7 @@ function NeedSummary({ kind, need }: { kind: OfferPartKind; need: Route.Componen
 }
 
 export default function Compare({ loaderData }: Route.ComponentProps) {
-  const { kind, comparison, values, errors } = loaderData;
+  const { kind, comparison, values, errors, plan } = loaderData;
   const [params, setParams] = useSearchParams();
   const sort: SortChoice = { id: params.get("sort") ?? "landed", desc: params.get("dir") === "desc" };
   const onSort = (choice: SortChoice) =>
@@ -95,7 +115,8 @@ export default function Compare({ loaderData }: Route.ComponentProps) {
       { replace: true, preventScrollReset: true },
     );
   const need = Object.fromEntries([...params].filter(([k]) => k !== "sort" && k !== "dir"));
-  const keep = new URLSearchParams(need).toString();
+  // From a plan, another kind of part takes its own figures from the plan again.
+  const keep = plan ? `plan=${plan.id}` : new URLSearchParams(need).toString();
   const caption = `${TITLES[kind]} offers compared, in ${comparison.pricing.quotingCurrency}`;
   const rows = comparison.rows;
   return (
@@ -121,7 +142,18 @@ export default function Compare({ loaderData }: Route.ComponentProps) {
         <Panel title="Compare for">
           <NeedForm kind={kind} values={values} errors={errors} sort={{ id: sort.id, dir: sort.desc ? "desc" : "asc" }} />
           <p className="mt-3 text-sm text-ink-soft" data-testid="need-summary">
-            <NeedSummary kind={kind} need={comparison.need} /> Until kit plans can be chosen here, type the figures; they stay in the page address.
+            <NeedSummary kind={kind} need={comparison.need} />{" "}
+            {plan ? (
+              <>
+                Figures taken from the plan{" "}
+                <Link to={`/plans/${plan.id}`} className="underline">
+                  {plan.name}
+                </Link>{" "}
+                (its design month; other modules are assumed to lose the same share as the plan's own). Change them to explore.
+              </>
+            ) : (
+              "Type the figures, or open this page from a kit plan; they stay in the page address."
+            )}
           </p>
         </Panel>
         {comparison.expiredCount ? (

@@ -5,6 +5,7 @@ import { installerWithTeam } from "./helpers/fixtures";
 import { choices, planningSetup } from "./helpers/planning-fixtures";
 import * as plansNew from "~/routes/plans-new";
 import * as plan from "~/routes/plan";
+import * as plan_ from "~/routes/plan";
 import * as plansApi from "~/routes/api.v1.plans";
 import * as planApi from "~/routes/api.v1.plan";
 import * as previewApi from "~/routes/api.v1.plans-preview";
@@ -154,5 +155,27 @@ describe("kit plans", () => {
     const sneaky = await api(previewApi, "action", b.client, "/api/v1/plans/preview", choices(setup));
     expect(sneaky.status).toBe(400);
     expect(sneaky.body.error.fields.siteId).toMatch(/No such site/);
+  });
+});
+
+describe("comparing offers for a plan", () => {
+  it("fills the comparison from the plan's design month, and refuses another team's plan", async () => {
+    const compare = await import("~/routes/sourcing.compare");
+    const a = await installerWithTeam("plan-compare");
+    const b = await installerWithTeam("plan-compare-other");
+    const setup = await planningSetup(a.teamId);
+    const saved = await a.client.action(plansNew, "/plans/new", { choices: JSON.stringify(choices(setup)) });
+    const planId = saved.location!.split("/").pop()!;
+    const first = await a.client.loader(compare, `/sourcing/compare/modules?plan=${planId}`, { kind: "modules" });
+    expect(first.status).toBe(302);
+    const filled = new URL(first.location!, "http://x");
+    const plan = (await a.client.loader(plan_, `/plans/${planId}`, { planId })).data.revision.result as KitPlan;
+    const design = plan.array.months[plan.array.designMonth! - 1];
+    expect(Number(filled.searchParams.get("energy"))).toBeCloseTo(design.requiredArrayWhPerDay / 1000, 3);
+    expect(filled.searchParams.get("bank")).toBe("24");
+    const page = await a.client.loader(compare, `${filled.pathname}${filled.search}`, { kind: "modules" });
+    expect(page.status).toBe(200);
+    expect(page.data.plan.name).toBe("Hut kit");
+    expect((await b.client.loader(compare, `/sourcing/compare/modules?plan=${planId}`, { kind: "modules" })).status).toBe(404);
   });
 });
