@@ -1,25 +1,10 @@
 // What the catalogue's pages and API hand out per part (camelCase, units in the names).
-import type { BatteryChemistry, CellTechnology, ControllerKind, NominalTempKind, PartKind } from "~/domain/catalogue/part-kinds";
+import type { ControllerKind, PartKind } from "~/domain/catalogue/part-kinds";
+import type { BatterySpec, InverterSpec, ModuleNameplate } from "~/domain/catalogue/part-specs";
 
-export interface ModuleItem {
+/** A module as listed: the curator's nameplate figures plus what is derived from them and from readings. */
+export interface ModuleItem extends ModuleNameplate {
   id: string;
-  maker: string;
-  model: string;
-  cellTechnology: CellTechnology;
-  cellsInSeries: number;
-  pmaxW: number;
-  vmpV: number;
-  impA: number;
-  vocV: number;
-  iscA: number;
-  gammaPmaxPctPerC: number;
-  betaVocPctPerC: number;
-  alphaIscPctPerC: number;
-  nominalTempKind: NominalTempKind;
-  noctC: number;
-  lengthMm: number;
-  widthMm: number;
-  massKg: number;
   areaM2: number;
   nameplateDensityWm2: number;
   nameplateEfficiencyPct: number;
@@ -33,18 +18,8 @@ export interface ModuleItem {
   mergedIntoId: string | null;
 }
 
-export interface BatteryItem {
+export interface BatteryItem extends BatterySpec {
   id: string;
-  maker: string;
-  model: string;
-  chemistry: BatteryChemistry;
-  nominalVoltageV: number;
-  capacityAh: number;
-  capacityHourRateH: number;
-  usableDodPct: number;
-  cycleLife: number;
-  roundTripEfficiencyPct: number;
-  massKg: number | null;
   energyKWh: number;
   usableEnergyKWh: number;
 }
@@ -62,15 +37,8 @@ export interface ControllerItem {
   efficiencyPct: number;
 }
 
-export interface InverterItem {
+export interface InverterItem extends InverterSpec {
   id: string;
-  maker: string;
-  model: string;
-  continuousW: number;
-  surgeW: number;
-  dcInputVoltageV: number;
-  efficiencyPct: number;
-  idleDrawW: number;
 }
 
 export type PartItem<K extends PartKind> = K extends "modules"
