@@ -3,6 +3,7 @@
 import { Form } from "react-router";
 import { SubmitButton } from "../form-field";
 import { Panel } from "../page-header";
+import { CsvFileErrors, CsvProblemsTable } from "../csv-check-findings";
 import type { OfferImportReport } from "~/lib/sourcing-types";
 
 export function OfferImportReportPanel({ report, csvText, busy }: { report: OfferImportReport; csvText: string; busy: boolean }) {
@@ -13,43 +14,8 @@ export function OfferImportReportPanel({ report, csvText, busy }: { report: Offe
         {report.rowCount} row{report.rowCount === 1 ? "" : "s"}: {report.readyCount} ready
         {report.problems.length ? `, ${report.problems.length} with problems` : ""}. Nothing has been written yet.
       </p>
-      {report.fileErrors.length ? (
-        <ul role="alert" className="mb-3 space-y-1 rounded-md border border-fail bg-fail-wash px-3 py-2 text-sm text-fail">
-          {report.fileErrors.map((e) => (
-            <li key={e}>
-              <span aria-hidden="true">✕</span> {e}
-            </li>
-          ))}
-        </ul>
-      ) : null}
-      {report.problems.length ? (
-        <div className="mb-4 max-h-[28rem] overflow-auto">
-          <table className="figures w-full text-left text-sm" data-testid="import-problems">
-            <thead className="sticky top-0 border-b border-rule bg-sheet text-xs text-ink-soft">
-              <tr>
-                <th className="py-1 pr-2 font-medium">Row</th>
-                <th className="py-1 pr-2 font-medium">Offer</th>
-                <th className="py-1 pr-2 font-medium">Column</th>
-                <th className="py-1 font-medium">Problem</th>
-              </tr>
-            </thead>
-            <tbody className="divide-y divide-rule">
-              {report.problems.flatMap((p) =>
-                p.errors.map((e, i) => (
-                  <tr key={`${p.row}-${i}`} data-row={p.row}>
-                    <td className="py-1 pr-2 align-top font-medium">{i === 0 ? p.row : ""}</td>
-                    <td className="py-1 pr-2 align-top">{i === 0 ? p.label : ""}</td>
-                    <td className="py-1 pr-2 align-top font-mono text-xs">{e.column}</td>
-                    <td className="py-1 align-top text-fail">
-                      <span aria-hidden="true">✕</span> {e.message}
-                    </td>
-                  </tr>
-                )),
-              )}
-            </tbody>
-          </table>
-        </div>
-      ) : null}
+      <CsvFileErrors errors={report.fileErrors} />
+      <CsvProblemsTable problems={report.problems} subject="Offer" />
       {report.readyCount ? (
         <ul className="mb-3 space-y-1 text-sm" data-testid="import-effects">
           {report.newSuppliers.map((s) => (
