@@ -1,7 +1,7 @@
 // POST /api/v1/yield: who may call it, what bad bodies get, and the Duffie & Beckman case end to end.
 import { describe, expect, it } from "vitest";
 import { RouteClient } from "./helpers/route-client";
-import { installerWithTeam } from "./helpers/fixtures";
+import { createTestModule, installerWithTeam } from "./helpers/fixtures";
 import * as yieldApi from "~/routes/api.v1.yield";
 import * as teamApiKeys from "~/routes/team-api-keys";
 import { db } from "~/server/db.server";
@@ -76,34 +76,13 @@ describe("POST /api/v1/yield", () => {
   it("accepts a team API key, and resolves a catalogue module by id", async () => {
     const owner = await installerWithTeam("yield-key");
     const created = await owner.client.action(teamApiKeys, "/team/api-keys", { intent: "create", name: "Yield bench" });
-    const module = await db
-      .insertInto("pv_module")
-      .values({
-        maker: "Test Maker",
-        model: `T-${Date.now()}`,
-        cell_technology: "mono-PERC",
-        cells_in_series: 36,
-        pmax_w: 100,
-        vmp_v: 18.2,
-        imp_a: 5.5,
-        voc_v: 22.1,
-        isc_a: 5.9,
-        gamma_pmax_pct_per_c: -0.4,
-        beta_voc_pct_per_c: -0.3,
-        alpha_isc_pct_per_c: 0.05,
-        noct_c: 45,
-        length_mm: 1000,
-        width_mm: 670,
-        mass_kg: 7,
-      })
-      .returning("id")
-      .executeTakeFirstOrThrow();
+    const module = await createTestModule("yield");
     const byFigures = await post(new RouteClient(), madisonBody(), { Authorization: `Bearer ${created.data.created.key}` });
     const byId = await post(new RouteClient(), { ...madisonBody(), module: { moduleId: module.id } }, { Authorization: `Bearer ${created.data.created.key}` });
     expect(byFigures.status).toBe(200);
     expect(byId.status).toBe(200);
     expect(byId.body.annualKWh).toBeCloseTo(byFigures.body.annualKWh, 6);
-    expect(byId.body.assumptions.join(" ")).toContain("Test Maker");
+    expect(byId.body.assumptions.join(" ")).toContain(module.model);
     // Verified power (85 % of nameplate from 4 readings) lowers the energy in proportion, and says so.
     await db.updateTable("pv_module").set({ verified_pmax_w: 85, verified_reading_count: 4 }).where("id", "=", module.id).execute();
     const verified = await post(

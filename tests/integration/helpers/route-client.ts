@@ -16,11 +16,12 @@ export interface RouteResult {
   location: string | null;
 }
 
-function isDataWithInit(value: unknown): value is { data: unknown; init: ResponseInit | null } {
+export function isDataWithInit(value: unknown): value is { data: unknown; init: ResponseInit | null } {
   return typeof value === "object" && value !== null && (value as { type?: string }).type === "DataWithResponseInit";
 }
 
-async function toResult(value: unknown): Promise<RouteResult> {
+/** A handler's returned or thrown value as the server would send it. */
+export async function toResult(value: unknown): Promise<RouteResult> {
   if (value instanceof Response) {
     const text = await value.text();
     let data: unknown = text;

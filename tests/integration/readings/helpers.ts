@@ -1,6 +1,6 @@
 // Field-reading fixtures for integration tests: a fresh catalogue module, a synthetic sweep, a
 // real PNG, and multipart submissions through the reading form's action as a browser sends them.
-import { BASE, type RouteClient, type RouteResult } from "../helpers/route-client";
+import { BASE, isDataWithInit, toResult, type RouteClient } from "../helpers/route-client";
 import { demoModulePhoto } from "../../../scripts/lib/demo-photo";
 import * as readingsNew from "~/routes/readings-new";
 import { currentAtVoltageA, explicitIvModel } from "~/domain/solar/iv-model";
@@ -8,33 +8,7 @@ import { db } from "~/server/db.server";
 
 export { demoModulePhoto };
 
-let moduleCounter = 0;
-/** An invented 100 W module, unique per call (γ −0.40 %/°C, NOCT 45 °C). */
-export async function createTestModule(label: string) {
-  moduleCounter += 1;
-  return db
-    .insertInto("pv_module")
-    .values({
-      maker: "Testbrook Cells",
-      model: `TB-${label}-${Date.now().toString(36)}-${moduleCounter}`,
-      cell_technology: "mono-PERC",
-      cells_in_series: 36,
-      pmax_w: 100,
-      vmp_v: 18.2,
-      imp_a: 5.5,
-      voc_v: 22.1,
-      isc_a: 5.9,
-      gamma_pmax_pct_per_c: -0.4,
-      beta_voc_pct_per_c: -0.3,
-      alpha_isc_pct_per_c: 0.05,
-      noct_c: 45,
-      length_mm: 1000,
-      width_mm: 670,
-      mass_kg: 7,
-    })
-    .returning(["id", "model"])
-    .executeTakeFirstOrThrow();
-}
+export { createTestModule } from "../helpers/fixtures";
 
 /** A sweep CSV drawn from the explicit I–V model; `scale` shrinks the current (a weaker module). */
 export function sweepCsv({ points = 60, scale = 1, seconds = 0.8 }: { points?: number; scale?: number; seconds?: number } = {}) {
@@ -81,26 +55,6 @@ export function readingForm(fields: Record<string, string>, files: { sweepFile?:
   const photo = files.photo === undefined ? { name: "module.png", type: "image/png", bytes: demoModulePhoto(1) } : files.photo;
   if (photo) form.append("photo", new File([photo.bytes as BlobPart], photo.name, { type: photo.type }));
   return form;
-}
-
-function isDataWithInit(value: unknown): value is { data: unknown; init: ResponseInit | null } {
-  return typeof value === "object" && value !== null && (value as { type?: string }).type === "DataWithResponseInit";
-}
-
-async function toResult(value: unknown): Promise<RouteResult> {
-  if (value instanceof Response) {
-    const text = await value.text();
-    let data: unknown = text;
-    try {
-      data = JSON.parse(text);
-    } catch {}
-    return { status: value.status, headers: value.headers, data, location: value.headers.get("Location") };
-  }
-  if (isDataWithInit(value)) {
-    const headers = new Headers(value.init?.headers);
-    return { status: value.init?.status ?? 200, headers, data: value.data, location: headers.get("Location") };
-  }
-  return { status: 200, headers: new Headers(), data: value, location: null };
 }
 
 /** Calls a route handler with a raw request (multipart, JSON…), as the server would. */
