@@ -64,12 +64,19 @@ function postgresIds() {
   return { uid, gid };
 }
 
-export function isClusterRunning({ dataDir }: ClusterOptions, binDir: string): boolean {
-  const result = spawnSync(join(binDir, "pg_ctl"), ["-D", dataDir, "status"], { stdio: "pipe" });
-  // pg_ctl status: 0 running, 3 not running, 4 no data directory. Non-root may lack access: read the pid file.
+export function isClusterRunning({ dataDir, port }: ClusterOptions, binDir: string): boolean {
+  // pg_ctl refuses to run as root, so as root it runs as the cluster's owner. It checks that the
+  // process in postmaster.pid is alive: a pid file left by a killed server does not count.
+  const isRoot = process.getuid?.() === 0;
+  const [file, argv] = isRoot
+    ? ["runuser", ["-u", "postgres", "--", join(binDir, "pg_ctl"), "-D", dataDir, "status"]]
+    : [join(binDir, "pg_ctl"), ["-D", dataDir, "status"]];
+  const result = spawnSync(file, argv, { stdio: "pipe" });
+  // pg_ctl status: 0 running, 3 not running, 4 no data directory.
   if (result.status === 0) return true;
   if (result.status === 3 || result.status === 4) return false;
-  return existsSync(join(dataDir, "postmaster.pid"));
+  // Not allowed to look (another user's cluster): running only if the pid file exists and the port answers.
+  return existsSync(join(dataDir, "postmaster.pid")) && portTaken(port);
 }
 
 export function startCluster(opts: ClusterOptions, binDir: string) {
