@@ -9,7 +9,18 @@ export default defineConfig({
     alias: { "~": fileURLToPath(new URL("./app", import.meta.url)) },
   },
   optimizeDeps: {
-    include: ["react", "react-dom", "react-router", "recharts", "@tanstack/react-table", "@conform-to/react", "@conform-to/zod/v4", "zod", "suncalc", "decimal.js"],
+    include: [
+      "react",
+      "react-dom",
+      "react-router",
+      "recharts",
+      "@tanstack/react-table",
+      "@conform-to/react",
+      "@conform-to/zod/v4",
+      "zod",
+      "suncalc",
+      "decimal.js",
+    ],
     exclude: ["better-auth", "kysely", "pg"],
   },
 });

@@ -22,6 +22,12 @@ export default defineConfig({
         },
       },
       {
+        // The production server on a throwaway PostgreSQL of its own: two instances, a database
+        // outage. Needs the production build: scripts/test.ts runs it after building.
+        resolve: { alias },
+        test: { name: "production", include: ["tests/production/**/*.test.ts"], fileParallelism: false, testTimeout: 60000, hookTimeout: 120000 },
+      },
+      {
         // Browser tests: started by scripts/test.ts against the production build (E2E_BASE_URL).
         resolve: { alias },
         test: { name: "e2e", include: ["tests/e2e/**/*.test.ts"], fileParallelism: false, testTimeout: 90000, hookTimeout: 60000 },

@@ -8,12 +8,15 @@ import { createRequestHandler } from "@react-router/express";
 import compression from "compression";
 import express, { type NextFunction, type Request, type Response } from "express";
 import type { ServerBuild } from "react-router";
+import { withDatabaseOutageAs503 } from "../app/server/database-outage.server";
+import { clientIpHeader, refuseCrossOriginWrites, trustProxySetting } from "./lib/request-guards";
 import { securityHeaders } from "./lib/security-headers";
 
 const port = Number(process.env.PORT ?? 3000);
 const host = process.env.HOST ?? "127.0.0.1";
 const logLevel = process.env.LOG_LEVEL ?? "info"; // "info": every request; "warn": 4xx and 5xx only; "error": 5xx only
 const buildPath = path.resolve(process.env.SERVER_BUILD ?? "build/server/index.js");
+const publicUrl = process.env.PUBLIC_URL ?? "http://127.0.0.1:3000";
 
 function log(fields: Record<string, unknown>) {
   process.stdout.write(`${JSON.stringify({ time: new Date().toISOString(), ...fields })}\n`);
@@ -34,12 +37,15 @@ function requestLog(req: Request, res: Response, next: NextFunction) {
   next();
 }
 
-const build = (await import(pathToFileURL(buildPath).href)) as ServerBuild;
+// Database outages answer 503 from any loader or action (app/server/database-outage.server.ts).
+const build = withDatabaseOutageAs503((await import(pathToFileURL(buildPath).href)) as ServerBuild);
 const app = express();
 app.disable("x-powered-by");
-app.set("trust proxy", process.env.TRUST_PROXY === "1");
+app.set("trust proxy", trustProxySetting(process.env.TRUST_PROXY));
 app.use(requestLog);
 app.use(securityHeaders);
+app.use(clientIpHeader);
+app.use(refuseCrossOriginWrites(publicUrl));
 app.use(compression());
 app.use("/assets", express.static(path.join(path.dirname(buildPath), "../client/assets"), { immutable: true, maxAge: "1y" }));
 // Other public files (favicon…): only paths that look like files, so a page request costs no stat().

@@ -1,8 +1,9 @@
 // npm test — everything, from a clean machine: Vitest (unit + integration against a PostgreSQL
-// cluster of its own), then the browser tests (Debian's Chromium, installed when absent) against
-// the production build with the fakes running. Exits non-zero on any failure.
+// cluster of its own), then the production build: its server tests (two instances, a database
+// outage) and the browser tests (Debian's Chromium, installed when absent) with the fakes running.
+// Exits non-zero on any failure.
 //   --no-e2e     unit and integration only
-//   --e2e-only   browser tests only
+//   --e2e-only   production-server and browser tests only
 import { spawnSync } from "node:child_process";
 import { existsSync } from "node:fs";
 import { databaseUrl, E2E_DATABASE, E2E_PORTS, TEST_CLUSTER } from "../tests/setup/test-env";
@@ -48,6 +49,10 @@ async function browserTests(): Promise<boolean> {
   await waitForFreePorts();
   step("Building the app");
   if (!run("node_modules/.bin/react-router", ["build"])) return false;
+  // Two production servers on a throwaway PostgreSQL of their own (free ports): sessions and limits
+  // shared, cross-site writes refused, a database outage answered with 503 and recovered from.
+  step("Production server tests (two instances, database outage)");
+  const productionOk = run("node_modules/.bin/vitest", ["run", "--project", "production"]);
   const binDir = findPostgresBinDir();
   ensureCluster(TEST_CLUSTER, binDir);
   const startedHere = startCluster(TEST_CLUSTER, binDir);
@@ -60,11 +65,12 @@ async function browserTests(): Promise<boolean> {
     await startFakes(env, E2E_PORTS);
     await startAppServer({ ...env, LOG_LEVEL: "warn" }, E2E_PORTS);
     step("Browser tests (Chromium)");
-    return run("node_modules/.bin/vitest", ["run", "--project", "e2e"], {
+    const browserOk = run("node_modules/.bin/vitest", ["run", "--project", "e2e"], {
       ...env,
       E2E_BASE_URL: `http://127.0.0.1:${E2E_PORTS.app}`,
       E2E_MAIL_URL: `http://127.0.0.1:${E2E_PORTS.mailHttp}`,
     });
+    return browserOk && productionOk;
   } finally {
     stopAll();
     if (startedHere) stopCluster(TEST_CLUSTER, binDir);

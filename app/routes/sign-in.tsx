@@ -7,9 +7,16 @@ import { Panel } from "~/components/page-header";
 import { safeRedirect, signInSchema } from "~/lib/auth-forms";
 import { auth } from "~/server/auth.server";
 import { authErrorMessage } from "~/server/auth-errors.server";
+import { gateSignIn } from "~/server/auth-attempts.server";
 import { getSessionUser } from "~/server/guards.server";
 
 export const meta: Route.MetaFunction = () => [{ title: "Sign in · Kitwright" }];
+
+// A refused attempt says when to come back (the action's Retry-After reaches the page's response).
+export function headers({ actionHeaders }: Route.HeadersArgs) {
+  const retryAfter = actionHeaders.get("Retry-After");
+  return retryAfter ? { "Retry-After": retryAfter } : new Headers();
+}
 
 export async function loader({ request }: Route.LoaderArgs) {
   if (await getSessionUser(request)) throw redirect("/");
@@ -21,8 +28,14 @@ export async function action({ request }: Route.ActionArgs) {
   const submission = parseWithZod(formData, { schema: signInSchema });
   if (submission.status !== "success") return data({ result: submission.reply({ hideFields: ["password"] }) }, { status: 400 });
   const { email, password, redirectTo } = submission.value;
+  const gate = await gateSignIn(request, email);
+  if (!gate.allowed) {
+    const result = submission.reply({ formErrors: [gate.message], hideFields: ["password"] });
+    return data({ result }, { status: 429, headers: { "Retry-After": String(gate.retryAfterSeconds) } });
+  }
   try {
     const { headers } = await auth.api.signInEmail({ body: { email, password }, headers: request.headers, returnHeaders: true });
+    await gate.succeeded();
     return redirect(safeRedirect(redirectTo), { headers });
   } catch (error) {
     if (!authErrorMessage(error)) throw error;

@@ -2,10 +2,13 @@
 // global roles (admin plugin) and installer teams with invitations (organization plugin).
 import { betterAuth } from "better-auth";
 import { admin, organization } from "better-auth/plugins";
+import { CLIENT_IP_HEADER } from "./client-ip.server";
 import { pool } from "./db.server";
 import { env } from "./env.server";
 import { sendMail } from "./mail.server";
 import { ROLES } from "~/lib/roles";
+
+const secureCookies = env.PUBLIC_URL.startsWith("https://");
 
 export const auth = betterAuth({
   appName: "Kitwright",
@@ -31,7 +34,22 @@ export const auth = betterAuth({
     },
   },
   session: { expiresIn: 60 * 60 * 24 * 14, updateAge: 60 * 60 * 24 },
-  advanced: { useSecureCookies: env.PUBLIC_URL.startsWith("https://") },
+  // better-auth's own limiter on /api/auth/*, stored in PostgreSQL so that every instance counts
+  // together (its default store is one instance's memory). Sign-in and reset requests get the
+  // stricter per-account and per-address limits of auth-attempts.server.ts instead.
+  rateLimit: {
+    enabled: true,
+    storage: "database",
+    customRules: { "/sign-in/email": false, "/request-password-reset": false },
+  },
+  advanced: {
+    useSecureCookies: secureCookies,
+    // Session cookies: never readable by scripts, not sent on cross-site sub-requests or posts, and
+    // only over TLS when the app is served over https.
+    defaultCookieAttributes: { httpOnly: true, sameSite: "lax", secure: secureCookies },
+    // Only the address scripts/serve.ts sets (after TRUST_PROXY); X-Forwarded-For can be forged.
+    ipAddress: { ipAddressHeaders: [CLIENT_IP_HEADER] },
+  },
   plugins: [
     admin({ defaultRole: ROLES.installer, adminRoles: [ROLES.admin] }),
     organization({

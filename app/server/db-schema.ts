@@ -2,6 +2,8 @@
 // Kitwright's own tables use snake_case.
 import type { ColumnType, Generated, GeneratedAlways, Selectable } from "kysely";
 import type { PlanningTables } from "./db-schema-planning";
+import type { QuoteTables } from "./db-schema-quotes";
+import type { SecurityTables } from "./db-schema-security";
 import type { SourcingTables } from "./db-schema-sourcing";
 import type { ReadingWorking } from "~/domain/readings/normalise-reading";
 
@@ -32,6 +34,17 @@ export interface SessionTable {
   userId: string;
   impersonatedBy: string | null;
   activeOrganizationId: string | null;
+}
+
+/** better-auth's sign-in methods per user; providerId "credential" holds the password hash. */
+export interface AccountTable {
+  id: string;
+  userId: string;
+  providerId: string;
+  accountId: string;
+  password: string | null;
+  createdAt: Timestamp;
+  updatedAt: Timestamp;
 }
 
 export interface OrganizationTable {
@@ -74,9 +87,10 @@ export interface TeamApiKeyTable {
   revoked_at: Timestamp | null;
 }
 
-export interface Database extends PlanningTables, SourcingTables {
+export interface Database extends PlanningTables, SourcingTables, QuoteTables, SecurityTables {
   user: UserTable;
   session: SessionTable;
+  account: AccountTable;
   organization: OrganizationTable;
   member: MemberTable;
   invitation: InvitationTable;
