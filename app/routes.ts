@@ -47,6 +47,14 @@ export default [
   route("sourcing/export", "routes/sourcing.export.ts"),
   route("sourcing/rates", "routes/sourcing.rates.tsx"),
   route("sourcing/compare/:kind", "routes/sourcing.compare.tsx"),
+  // — quotes (issue 7) —
+  route("quotes", "routes/quotes.tsx"),
+  route("quotes/:quoteId", "routes/quote.tsx"),
+  route("quotes/:quoteId/print", "routes/quote-print.tsx"),
+  route("quote-access/:token", "routes/quote-access.tsx"),
+  route("my-quotes", "routes/my-quotes.tsx"),
+  route("my-quotes/:quoteId", "routes/my-quote.tsx"),
+  route("my-quotes/:quoteId/print", "routes/my-quote-print.tsx"),
   route("dev/outbox", "routes/dev-outbox.tsx"),
   route("healthz", "routes/healthz.ts"),
   route("readyz", "routes/readyz.ts"),
@@ -70,6 +78,8 @@ export default [
     route("offers", "routes/api.v1.offers.ts"),
     route("offers/import", "routes/api.v1.offers.import.ts"),
     route("offers/:offerId", "routes/api.v1.offer.ts"),
+    // — API: deposit payments (issue 7) —
+    route("payments/webhook", "routes/api.v1.payments.webhook.ts"),
     route("*", "routes/api.v1.not-found.ts"),
   ]),
   route("*", "routes/not-found.tsx"),

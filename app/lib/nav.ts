@@ -15,6 +15,8 @@ export const NAV_ITEMS: NavItem[] = [
   { label: "Sites", to: "/sites", roles: ["installer"] },
   { label: "Kit plans", to: "/plans", roles: ["installer"] },
   { label: "Sourcing", to: "/sourcing", roles: ["installer"] },
+  { label: "Quotes", to: "/quotes", roles: ["installer"] },
+  { label: "Your quotes", to: "/my-quotes", roles: ["customer"] },
   { label: "Team", to: "/team", roles: ["installer"] },
   { label: "Users", to: "/admin/users", roles: ["admin"] },
 ];

@@ -17,6 +17,8 @@ export async function loader({ request }: Route.LoaderArgs) {
 const SECTION_TEXT: Record<string, string> = {
   "/catalogue": "Modules, batteries, controllers and inverters; nameplate against verified watts from field readings.",
   "/yield": "Energy per module per month at a site, from latitude, tilt, azimuth and the monthly climate.",
+  "/quotes": "Quotes from kit plans at your offers' prices; sent, approved and paid by card.",
+  "/my-quotes": "The quotes installers have sent you: read, approve or decline, pay the deposit.",
   "/team": "Members, invitations and API keys for integrations.",
   "/admin/users": "Every account and its role.",
 };
@@ -36,7 +38,7 @@ export default function Home({ loaderData }: Route.ComponentProps) {
           or open the invitation link a colleague sent you.
         </p>
       ) : null}
-      {user.role === "customer" ? <p className="text-ink-soft">Quotes your installer sends you will be listed here.</p> : null}
+      {user.role === "customer" ? <p className="mb-4 text-ink-soft">Quotes your installer sends you are listed under “Your quotes”.</p> : null}
       <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
         {navFor(user.role).map((item) => (
           <Link key={item.to} to={item.to} className="rounded-xl border border-rule bg-sheet p-5 shadow-sm hover:border-copper">

@@ -111,6 +111,12 @@ export default function PlanPage({ loaderData, actionData }: Route.ComponentProp
         actions={
           l.isLatest ? (
             <span className="flex flex-col items-end gap-1">
+              <Form method="post" action="/quotes">
+                <input type="hidden" name="planId" value={l.planId} />
+                <button type="submit" className="rounded-md bg-copper px-3 py-1.5 text-sm font-medium text-sheet hover:bg-copper-dark">
+                  Quote this plan
+                </button>
+              </Form>
               <Link to={`/plans/${l.planId}/alternatives`} className="text-sm font-medium text-copper underline">
                 Cheaper kits from your offers →
               </Link>

@@ -11,6 +11,7 @@ import {
 } from "../../scripts/lib/postgres-cluster";
 import { execFileSync } from "node:child_process";
 import { startMailFake } from "../../fakes/mail-server";
+import { DEFAULT_WEBHOOK_SECRET, startPaymentsFake } from "../../fakes/payments-server";
 import { databaseUrl, INTEGRATION_DATABASE, TEST_CLUSTER } from "./test-env";
 
 export default async function setup() {
@@ -25,6 +26,8 @@ export default async function setup() {
   execFileSync("node_modules/.bin/tsx", ["scripts/migrate.ts"], { env: { ...process.env, DATABASE_URL: url }, stdio: ["ignore", "ignore", "inherit"] });
   // Free ports chosen by the system, so that several runs on one machine never collide.
   const mail = await startMailFake({ smtpPort: 0, httpPort: 0, log: () => {} });
+  // Records events without delivering them: tests post them to the webhook action themselves.
+  const payments = await startPaymentsFake({ port: 0, log: () => {} });
 
   Object.assign(process.env, {
     NODE_ENV: "test",
@@ -34,10 +37,14 @@ export default async function setup() {
     SMTP_PORT: String(mail.smtpPort),
     MAIL_FAKE_URL: mail.url,
     ENABLE_DEV_OUTBOX: "true",
+    STRIPE_SECRET_KEY: "sk_test_integration",
+    STRIPE_API_URL: payments.url,
+    STRIPE_WEBHOOK_SECRET: DEFAULT_WEBHOOK_SECRET,
   });
 
   return async () => {
     await mail.close();
+    await payments.close();
     if (process.env.KITWRIGHT_KEEP_TEST_DB) return;
     await dropDatabase(TEST_CLUSTER.port, database);
     if (startedHere && (await otherTestDatabases(TEST_CLUSTER.port)) === 0) stopCluster(TEST_CLUSTER, binDir);

@@ -1,0 +1,183 @@
+// Quotes end to end through the route modules: drafted from a plan at the team's offer prices, edited,
+// sent by e-mail to a new customer account, opened, revised, approved; and who may see what.
+import { describe, expect, it } from "vitest";
+import { firstLink, installerWithTeam, latestMailTo, userWithRole } from "../helpers/fixtures";
+import { RouteClient, uniqueEmail } from "../helpers/route-client";
+import { editorForm, teamWithPlan } from "./quote-helpers";
+import * as quotes from "~/routes/quotes";
+import * as quotePage from "~/routes/quote";
+import * as quotePrint from "~/routes/quote-print";
+import * as quoteAccess from "~/routes/quote-access";
+import * as myQuote from "~/routes/my-quote";
+import * as myQuotes from "~/routes/my-quotes";
+import { db } from "~/server/db.server";
+import type { QuoteEditorForm } from "~/lib/quote-forms";
+
+async function draftQuote(team: Awaited<ReturnType<typeof teamWithPlan>>) {
+  const created = await team.client.action(quotes, "/quotes", { planId: team.planId });
+  expect(created.status, JSON.stringify(created.data)).toBe(302);
+  const quoteId = created.location!.split("/").pop()!;
+  const page = await team.client.loader(quotePage, `/quotes/${quoteId}`, { quoteId });
+  expect(page.status).toBe(200);
+  return { quoteId, page };
+}
+
+/** Net 860.00, tax 124.00 (20 % on 540.00, 5 % on 320.00), gross 984.00, deposit 30 % 295.20 — by hand below. */
+function pricedLines(values: QuoteEditorForm, customerEmail: string): QuoteEditorForm {
+  const module = values.lines.find((l) => l.partKind === "modules")!;
+  return {
+    ...values,
+    customerName: "Ilse Warden",
+    customerEmail,
+    marginPct: "20",
+    discountPct: "0",
+    taxRatePct: "20",
+    depositPct: "30",
+    validUntil: "2099-06-30",
+    lines: [
+      // 4 × (100.00 × 1.20 = 120.00) = 480.00 at 20 %
+      { ...module, quantity: "4", unitCost: "100.00" },
+      // 8 h × 40.00, no margin, reduced tax 5 %: 320.00
+      { kind: "labour", description: "Installation labour (hours)", quantity: "8", unitCost: "40.00", marginPct: "0", taxRatePct: "5" },
+      // 50.00 × 1.20 = 60.00 at 20 %
+      { kind: "freight", description: "Freight to site", quantity: "1", unitCost: "50.00" },
+    ],
+  };
+}
+
+describe("quotes", () => {
+  it("drafts from the plan at the cheapest offer, refuses to send unpriced lines, then sends to a new customer", async () => {
+    const team = await teamWithPlan("q-flow");
+    const { quoteId, page } = await draftQuote(team);
+    const values = page.data.editor as QuoteEditorForm;
+    const moduleLine = values.lines.find((l) => l.partKind === "modules")!;
+    expect(moduleLine.unitCost).toBe("100");
+    expect(moduleLine.offerId).toBeTruthy();
+    expect(values.lines.map((l) => l.kind)).toEqual(expect.arrayContaining(["part", "labour", "mounting", "freight"]));
+    expect(values.customerName).toBe("Warden");
+
+    const unpriced = await team.client.action(quotePage, `/quotes/${quoteId}`, { intent: "send" }, { quoteId });
+    expect(unpriced.status).toBe(400);
+
+    const customerEmail = uniqueEmail("q-customer");
+    const saved = await team.client.action(quotePage, `/quotes/${quoteId}`, editorForm(pricedLines(values, customerEmail)), { quoteId });
+    expect(saved.status, JSON.stringify(saved.data)).toBe(302);
+    const rev = await db.selectFrom("quote_revision").selectAll().where("quote_id", "=", quoteId).executeTakeFirstOrThrow();
+    expect([rev.net, rev.tax, rev.gross, rev.deposit]).toEqual(["860.00", "124.00", "984.00", "295.20"]);
+    expect(rev.tax_bands).toEqual([
+      { ratePct: "20", net: "540.00", tax: "108.00" },
+      { ratePct: "5", net: "320.00", tax: "16.00" },
+    ]);
+
+    const sent = await team.client.action(quotePage, `/quotes/${quoteId}`, { intent: "send" }, { quoteId });
+    expect(sent.status, JSON.stringify(sent.data)).toBe(302);
+    const account = await db.selectFrom("user").select(["id", "role"]).where("email", "=", customerEmail).executeTakeFirstOrThrow();
+    expect(account.role).toBe("customer");
+    const mail = await latestMailTo(customerEmail);
+    expect(mail.subject).toMatch(/Q-0001/);
+    expect(mail.text).toContain("EUR 984.00");
+    const link = firstLink(mail.text, "/quote-access/");
+
+    // The customer chooses a first password from the e-mail's link and lands on the quote, signed in.
+    const customer = new RouteClient();
+    const token = link.pathname.split("/").pop()!;
+    const access = await customer.loader(quoteAccess, link.pathname, { token });
+    expect(access.data.state).toBe("choose-password");
+    const chosen = await customer.action(quoteAccess, link.pathname, { password: "a-long-password-1", confirmPassword: "a-long-password-1" }, { token });
+    expect(chosen.status).toBe(302);
+    expect(chosen.location).toBe(`/my-quotes/${quoteId}`);
+    const view = await customer.loader(myQuote, `/my-quotes/${quoteId}`, { quoteId });
+    expect(view.status).toBe(200);
+    expect(view.data.status).toBe("viewed");
+    expect(view.data.doc.totals.gross).toBe("984.00");
+    // Costs and margins never reach the customer's page.
+    for (const word of ["unit_cost", "unitCost", "margin_pct", "marginPct", "100.00"]) expect(JSON.stringify(view.data)).not.toContain(word);
+
+    // A second visit to the link sends the customer to sign in rather than set a password again.
+    const again = await new RouteClient().loader(quoteAccess, link.pathname, { token });
+    expect(again.location).toBe(`/sign-in?redirectTo=${encodeURIComponent(`/my-quotes/${quoteId}`)}`);
+
+    // Editing a sent quote makes revision 2; the customer keeps reading revision 1 until it is sent.
+    const edited = pricedLines(values, customerEmail);
+    edited.lines[2] = { ...edited.lines[2], unitCost: "75.00" };
+    const revised = await team.client.action(quotePage, `/quotes/${quoteId}`, editorForm({ ...edited, note: "Freight by the valley carrier" }), { quoteId });
+    expect(revised.status).toBe(302);
+    expect((await customer.loader(myQuote, `/my-quotes/${quoteId}`, { quoteId })).data.doc.revision).toBe(1);
+    const old = await team.client.loader(quotePrint, `/quotes/${quoteId}/print?revision=1`, { quoteId });
+    expect(old.data.doc.totals.gross).toBe("984.00");
+    expect((await team.client.action(quotePage, `/quotes/${quoteId}`, { intent: "send" }, { quoteId })).status).toBe(302);
+    const latest = await customer.loader(myQuote, `/my-quotes/${quoteId}`, { quoteId });
+    // Freight 75.00 × 1.20 = 90.00: net 890.00, tax 114.00 + 16.00 = 130.00, gross 1020.00
+    expect(latest.data.doc.revision).toBe(2);
+    expect(latest.data.doc.totals.gross).toBe("1020.00");
+
+    const approved = await customer.action(myQuote, `/my-quotes/${quoteId}`, { intent: "approve", acceptedName: "Ilse Warden", confirm: "on" }, { quoteId });
+    expect(approved.status, JSON.stringify(approved.data)).toBe(302);
+    const teamMail = await latestMailTo(team.email);
+    expect(teamMail.subject).toMatch(/approved quote Q-0001/);
+    const timeline = (await team.client.loader(quotePage, `/quotes/${quoteId}`, { quoteId })).data.events.map((e: { kind: string }) => e.kind);
+    expect(timeline).toEqual(["created", "sent", "viewed", "revised", "sent", "viewed", "approved"]);
+    // Approved quotes are settled: no more edits.
+    const late = await team.client.action(quotePage, `/quotes/${quoteId}`, editorForm(edited), { quoteId });
+    expect(late.status).toBe(409);
+  });
+
+  it("keeps quotes to their team and their customer", async () => {
+    const team = await teamWithPlan("q-access");
+    const { quoteId, page } = await draftQuote(team);
+    const customerEmail = uniqueEmail("q-access-customer");
+    await team.client.action(quotePage, `/quotes/${quoteId}`, editorForm(pricedLines(page.data.editor, customerEmail)), { quoteId });
+    expect((await team.client.action(quotePage, `/quotes/${quoteId}`, { intent: "send" }, { quoteId })).status).toBe(302);
+
+    const otherTeam = await installerWithTeam("q-access-other");
+    expect((await otherTeam.client.loader(quotePage, `/quotes/${quoteId}`, { quoteId })).status).toBe(404);
+    expect((await otherTeam.client.loader(quotePrint, `/quotes/${quoteId}/print`, { quoteId })).status).toBe(404);
+    expect((await otherTeam.client.action(quotePage, `/quotes/${quoteId}`, { intent: "withdraw" }, { quoteId })).status).toBe(404);
+    expect((await otherTeam.client.loader(quotes, "/quotes")).data.quotes).toEqual([]);
+
+    const otherCustomer = await userWithRole("customer", "q-access-cust2");
+    expect((await otherCustomer.client.loader(myQuote, `/my-quotes/${quoteId}`, { quoteId })).status).toBe(404);
+    expect(
+      (await otherCustomer.client.action(myQuote, `/my-quotes/${quoteId}`, { intent: "approve", acceptedName: "X Y", confirm: "on" }, { quoteId })).status,
+    ).toBe(404);
+    expect((await otherCustomer.client.loader(myQuotes, "/my-quotes")).data.quotes).toEqual([]);
+    // A customer has no team pages.
+    expect((await otherCustomer.client.loader(quotes, "/quotes")).status).toBe(403);
+    expect((await otherCustomer.client.loader(quotePage, `/quotes/${quoteId}`, { quoteId })).status).toBe(403);
+
+    // Withdrawn: the customer's link and page stop working.
+    const link = firstLink((await latestMailTo(customerEmail)).text, "/quote-access/");
+    expect((await team.client.action(quotePage, `/quotes/${quoteId}`, { intent: "withdraw", reason: "Wrong site" }, { quoteId })).status).toBe(302);
+    const token = link.pathname.split("/").pop()!;
+    expect((await new RouteClient().loader(quoteAccess, link.pathname, { token })).data.state).toBe("stale");
+  });
+
+  it("takes a decline with its comment, and refuses a plan with an unaccepted failing safety check", async () => {
+    const team = await teamWithPlan("q-decline");
+    const { quoteId, page } = await draftQuote(team);
+    const customer = await userWithRole("customer", "q-decline-cust");
+    await team.client.action(quotePage, `/quotes/${quoteId}`, editorForm(pricedLines(page.data.editor, customer.email)), { quoteId });
+    expect((await team.client.action(quotePage, `/quotes/${quoteId}`, { intent: "send" }, { quoteId })).status).toBe(302);
+    const empty = await customer.client.action(myQuote, `/my-quotes/${quoteId}`, { intent: "decline", comment: "" }, { quoteId });
+    expect(empty.status).toBe(400);
+    const declined = await customer.client.action(myQuote, `/my-quotes/${quoteId}`, { intent: "decline", comment: "Too dear for this summer" }, { quoteId });
+    expect(declined.status).toBe(302);
+    const q = await db.selectFrom("quote").select(["status", "decision_comment"]).where("id", "=", quoteId).executeTakeFirstOrThrow();
+    expect(q).toEqual({ status: "declined", decision_comment: "Too dear for this summer" });
+    expect((await customer.client.action(myQuote, `/my-quotes/${quoteId}`, { intent: "pay" }, { quoteId })).status).toBe(409);
+
+    // Make the plan's latest revision fail a safety check with no reason recorded.
+    const rev = await db.selectFrom("kit_plan_revision").select(["id", "result"]).where("plan_id", "=", team.planId).executeTakeFirstOrThrow();
+    const result = rev.result;
+    const check = result.checks.find((c) => c.kind === "safety")!;
+    check.status = "fail";
+    await db
+      .updateTable("kit_plan_revision")
+      .set({ result: JSON.stringify(result) })
+      .where("id", "=", rev.id)
+      .execute();
+    const refused = await team.client.action(quotes, "/quotes", { planId: team.planId });
+    expect(refused.status).toBe(409);
+    expect(refused.data.message).toContain(check.title);
+  });
+});
