@@ -78,6 +78,9 @@ export default [
     route("offers", "routes/api.v1.offers.ts"),
     route("offers/import", "routes/api.v1.offers.import.ts"),
     route("offers/:offerId", "routes/api.v1.offer.ts"),
+    // — API: quotes (issue 7) —
+    route("quotes", "routes/api.v1.quotes.ts"),
+    route("quotes/:quoteId", "routes/api.v1.quote.ts"),
     // — API: deposit payments (issue 7) —
     route("payments/webhook", "routes/api.v1.payments.webhook.ts"),
     route("*", "routes/api.v1.not-found.ts"),

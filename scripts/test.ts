@@ -4,6 +4,8 @@
 // Exits non-zero on any failure.
 //   --no-e2e     unit and integration only
 //   --e2e-only   production-server and browser tests only
+//   --browser-only   browser tests only (no production-server project)
+//   other words  file filters for the production-server and browser projects, e.g. `quote-deposit`
 import { spawnSync } from "node:child_process";
 import { existsSync } from "node:fs";
 import { databaseUrl, E2E_DATABASE, E2E_PORTS, TEST_CLUSTER } from "../tests/setup/test-env";
@@ -12,8 +14,10 @@ import { isPortInUse, stopAll } from "./lib/processes";
 import { appEnv, startAppServer, startFakes } from "./lib/services";
 
 const args = new Set(process.argv.slice(2));
-const runVitest = !args.has("--e2e-only");
+const filters = [...args].filter((a) => !a.startsWith("--"));
+const runVitest = !args.has("--e2e-only") && !args.has("--browser-only");
 const runE2e = !args.has("--no-e2e");
+const runProduction = !args.has("--browser-only");
 
 function step(title: string) {
   console.log(`\n━━ ${title}`);
@@ -52,7 +56,7 @@ async function browserTests(): Promise<boolean> {
   // Two production servers on a throwaway PostgreSQL of their own (free ports): sessions and limits
   // shared, cross-site writes refused, a database outage answered with 503 and recovered from.
   step("Production server tests (two instances, database outage)");
-  const productionOk = run("node_modules/.bin/vitest", ["run", "--project", "production"]);
+  const productionOk = runProduction ? run("node_modules/.bin/vitest", ["run", "--project", "production", "--passWithNoTests", ...filters]) : true;
   const binDir = findPostgresBinDir();
   ensureCluster(TEST_CLUSTER, binDir);
   const startedHere = startCluster(TEST_CLUSTER, binDir);
@@ -65,7 +69,7 @@ async function browserTests(): Promise<boolean> {
     await startFakes(env, E2E_PORTS);
     await startAppServer({ ...env, LOG_LEVEL: "warn" }, E2E_PORTS);
     step("Browser tests (Chromium)");
-    const browserOk = run("node_modules/.bin/vitest", ["run", "--project", "e2e"], {
+    const browserOk = run("node_modules/.bin/vitest", ["run", "--project", "e2e", "--passWithNoTests", ...filters], {
       ...env,
       E2E_BASE_URL: `http://127.0.0.1:${E2E_PORTS.app}`,
       E2E_MAIL_URL: `http://127.0.0.1:${E2E_PORTS.mailHttp}`,

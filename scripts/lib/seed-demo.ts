@@ -37,6 +37,7 @@ export async function seedDemo(log: (line: string) => void = () => {}) {
   await (await import("./seed-readings")).seedDemoReadings(db, log);
   await (await import("./seed-sourcing")).seedDemoSourcing(db, log);
   await (await import("./seed-planning")).seedDemoPlanning(log);
+  await (await import("./seed-quotes")).seedDemoQuotes(log);
 }
 
 /** Seeds only a database with no users yet, so `npm start` never overwrites someone's work. */

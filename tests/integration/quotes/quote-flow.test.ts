@@ -10,6 +10,8 @@ import * as quotePrint from "~/routes/quote-print";
 import * as quoteAccess from "~/routes/quote-access";
 import * as myQuote from "~/routes/my-quote";
 import * as myQuotes from "~/routes/my-quotes";
+import * as quotesApi from "~/routes/api.v1.quotes";
+import * as quoteApi from "~/routes/api.v1.quote";
 import { db } from "~/server/db.server";
 import type { QuoteEditorForm } from "~/lib/quote-forms";
 
@@ -134,6 +136,16 @@ describe("quotes", () => {
     expect((await otherTeam.client.loader(quotePrint, `/quotes/${quoteId}/print`, { quoteId })).status).toBe(404);
     expect((await otherTeam.client.action(quotePage, `/quotes/${quoteId}`, { intent: "withdraw" }, { quoteId })).status).toBe(404);
     expect((await otherTeam.client.loader(quotes, "/quotes")).data.quotes).toEqual([]);
+
+    // The API: the team reads its quote with costs; another team gets 404; anonymous 401.
+    const own = await team.client.loader(quoteApi, `/api/v1/quotes/${quoteId}`, { quoteId });
+    expect(own.status).toBe(200);
+    expect(own.data.revision.totals.gross).toBe("984.00");
+    expect(own.data.revision.lines[0].unitCost).toBe("100.00");
+    expect((await team.client.loader(quotesApi, "/api/v1/quotes?status=sent")).data.items.map((q: { id: string }) => q.id)).toContain(quoteId);
+    expect((await team.client.loader(quotesApi, "/api/v1/quotes?status=bogus")).status).toBe(400);
+    expect((await otherTeam.client.loader(quoteApi, `/api/v1/quotes/${quoteId}`, { quoteId })).status).toBe(404);
+    expect((await new RouteClient().loader(quoteApi, `/api/v1/quotes/${quoteId}`, { quoteId })).status).toBe(401);
 
     const otherCustomer = await userWithRole("customer", "q-access-cust2");
     expect((await otherCustomer.client.loader(myQuote, `/my-quotes/${quoteId}`, { quoteId })).status).toBe(404);
