@@ -15,10 +15,11 @@ export async function loader({ request, params }: Route.LoaderArgs) {
 }
 
 export default function MyQuotePrint({ loaderData }: Route.ComponentProps) {
+  // A4's printable width on screen too, so the chart is laid out at the width it prints at.
   return (
-    <>
+    <div className="mx-auto max-w-[190mm]">
       <PrintBar backTo={`/my-quotes/${loaderData.quoteId}`} backLabel="Back to the quote" />
       <QuoteDocument doc={loaderData.doc} />
-    </>
+    </div>
   );
 }

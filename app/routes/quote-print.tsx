@@ -16,11 +16,12 @@ export async function loader({ request, params }: Route.LoaderArgs) {
 }
 
 export default function QuotePrint({ loaderData }: Route.ComponentProps) {
+  // A4's printable width on screen too, so the chart is laid out at the width it prints at.
   return (
-    <>
+    <div className="mx-auto max-w-[190mm]">
       <PrintBar backTo={`/quotes/${loaderData.quoteId}`} backLabel="Back to the quote" />
       {!loaderData.sent ? <p className="no-print mb-3 text-sm text-warn">⚠ This revision has not been sent yet: it is a draft.</p> : null}
       <QuoteDocument doc={loaderData.doc} />
-    </>
+    </div>
   );
 }

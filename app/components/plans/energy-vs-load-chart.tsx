@@ -8,7 +8,7 @@ import { MONTH_NAMES, MONTH_SHORT, formatNumber } from "~/lib/plan-format";
 const INK_SOFT = "#4a5062";
 
 /** Legend words in ink: the pale bar colour alone would leave its name hard to read. */
-function legendText(value: string) {
+export function legendText(value: string) {
   return <span style={{ color: "#1d2333" }}>{value}</span>;
 }
 

@@ -69,17 +69,17 @@ export function QuoteEditor({
       <Panel title="Lines">
         <FieldError id={fields.lines.errorId} errors={fields.lines.errors} />
         <div className="overflow-x-auto">
-          <table className="w-full min-w-[56rem] text-sm">
+          <table className="w-full min-w-[44rem] text-sm">
             <thead>
               <tr className="text-left text-ink-soft">
-                <th className="w-32 pb-2 font-medium">Kind</th>
+                <th className="w-28 pb-2 font-medium">Kind</th>
                 <th className="pb-2 font-medium">Description</th>
-                <th className="w-20 pb-2 font-medium">Qty</th>
-                <th className="w-28 pb-2 font-medium">Unit cost ({currency})</th>
-                <th className="w-20 pb-2 font-medium">Margin %</th>
-                <th className="w-20 pb-2 font-medium">Discount %</th>
-                <th className="w-20 pb-2 font-medium">Tax %</th>
-                <th className="w-10 pb-2">
+                <th className="w-16 pb-2 font-medium">Qty</th>
+                <th className="w-24 pb-2 font-medium">Unit cost</th>
+                <th className="w-16 pb-2 font-medium">Margin %</th>
+                <th className="w-16 pb-2 font-medium">Disc. %</th>
+                <th className="w-16 pb-2 font-medium">Tax %</th>
+                <th className="w-8 pb-2">
                   <span className="sr-only">Remove</span>
                 </th>
               </tr>
@@ -166,8 +166,8 @@ export function QuoteEditor({
           ))}
         </div>
         <p className="mt-2 text-xs text-ink-faint">
-          Unit cost is what the line costs your team; the customer sees the unit price after your margin. A blank margin, discount or tax rate uses the
-          quote-wide figure shown faintly.
+          Unit cost ({currency}) is what the line costs your team; the customer sees the unit price after your margin. A blank margin, discount or tax rate uses
+          the quote-wide figure shown faintly.
         </p>
       </Panel>
       <Panel title="Totals">

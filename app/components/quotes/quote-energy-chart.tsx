@@ -1,5 +1,6 @@
 // Month by month, what the kit delivers on an average day against what the customer's loads use.
 import { Bar, CartesianGrid, ComposedChart, Legend, Line, ResponsiveContainer, XAxis, YAxis } from "recharts";
+import { legendText } from "~/components/plans/energy-vs-load-chart";
 import type { SnapshotMonth } from "~/domain/quotes/quote-types";
 import { MONTH_SHORT, formatNumber } from "~/lib/plan-format";
 
@@ -25,7 +26,7 @@ export function QuoteEnergyChart({ months }: { months: SnapshotMonth[] }) {
               width={44}
               label={{ value: "kWh/day", angle: -90, position: "insideLeft", fill: "#4a5062", fontSize: 11 }}
             />
-            <Legend wrapperStyle={{ fontSize: 12 }} />
+            <Legend wrapperStyle={{ fontSize: 12 }} formatter={legendText} />
             <Bar dataKey="kit" name="Kit delivers (kWh/day)" fill="#e3c9b3" stroke="#a4532a" isAnimationActive={false} />
             <Line dataKey="loads" name="Your loads use (kWh/day)" stroke="#1d2333" strokeWidth={2.5} dot={{ r: 3 }} isAnimationActive={false} />
           </ComposedChart>

@@ -4,7 +4,7 @@ import { STATUS_LABELS, type QuoteStatus } from "~/domain/quotes/quote-status";
 const LOOK: Record<QuoteStatus, { icon: string; className: string }> = {
   draft: { icon: "✎", className: "border-rule bg-paper text-ink-soft" },
   sent: { icon: "✉", className: "border-copper bg-sheet text-copper-dark" },
-  viewed: { icon: "👁", className: "border-copper bg-sheet text-copper-dark" },
+  viewed: { icon: "◉", className: "border-copper bg-sheet text-copper-dark" },
   approved: { icon: "✓", className: "border-pass bg-pass-wash text-pass" },
   declined: { icon: "✕", className: "border-fail bg-fail-wash text-fail" },
   expired: { icon: "⌛", className: "border-warn bg-warn-wash text-warn" },
