@@ -60,12 +60,12 @@ export function QuoteDocument({ doc }: { doc: QuoteDocumentData }) {
           <QuoteTotalsTable figures={doc.totals} />
         </div>
       </section>
-      <section className="break-inside-avoid">
-        <h2 className="mb-2 text-lg font-semibold">Energy you can expect</h2>
+      <section>
+        <h2 className="mb-2 text-lg font-semibold break-after-avoid">Energy you can expect</h2>
         <QuoteEnergyChart months={plan.months} />
       </section>
-      <section className="break-inside-avoid">
-        <h2 className="mb-2 text-lg font-semibold">How the design was checked</h2>
+      <section>
+        <h2 className="mb-2 text-lg font-semibold break-after-avoid">How the design was checked</h2>
         <QuoteChecksList checks={plan.checks} />
       </section>
       <div className="break-inside-avoid">

@@ -34,15 +34,15 @@ export function QuoteLinesTable({ lines, currency }: { lines: ShownLine[]; curre
           <tr key={l.position}>
             <td className="py-1.5 pr-2 tabular-nums">{l.position}</td>
             <td className="py-1.5 pr-2">{l.description}</td>
-            <td className="py-1.5 pr-2 text-right tabular-nums">{new Decimal(l.quantity).toString()}</td>
-            <td className="py-1.5 pr-2 text-right tabular-nums">{m(l.unitPrice)}</td>
+            <td className="py-1.5 pr-2 text-right whitespace-nowrap tabular-nums">{new Decimal(l.quantity).toString()}</td>
+            <td className="py-1.5 pr-2 text-right whitespace-nowrap tabular-nums">{m(l.unitPrice)}</td>
             {anyDiscount ? (
-              <td className="py-1.5 pr-2 text-right tabular-nums">
+              <td className="py-1.5 pr-2 text-right whitespace-nowrap tabular-nums">
                 {new Decimal(l.discountPct).isZero() ? "—" : `${new Decimal(l.discountPct).toString()} %`}
               </td>
             ) : null}
-            <td className="py-1.5 pr-2 text-right tabular-nums">{new Decimal(l.taxRatePct).toString()} %</td>
-            <td className="py-1.5 text-right tabular-nums">{m(l.lineNet)}</td>
+            <td className="py-1.5 pr-2 text-right whitespace-nowrap tabular-nums">{new Decimal(l.taxRatePct).toString()} %</td>
+            <td className="py-1.5 text-right whitespace-nowrap tabular-nums">{m(l.lineNet)}</td>
           </tr>
         ))}
       </tbody>
