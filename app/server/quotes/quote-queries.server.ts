@@ -3,7 +3,13 @@
 import { sql } from "kysely";
 import { db } from "../db.server";
 import { isUuid } from "../modules.server";
+import type { Executor } from "./quote-events.server";
 import type { QuoteStatus } from "~/domain/quotes/quote-status";
+
+/** A quote row with its team's name (the name heads every document and e-mail about it). */
+export function quoteWithTeam(ex: Executor = db) {
+  return ex.selectFrom("quote").innerJoin("organization", "organization.id", "quote.team_id").selectAll("quote").select("organization.name as team_name");
+}
 
 const revisionColumns = [
   "quote_revision.id",
@@ -91,14 +97,7 @@ async function timelineAndPayments(quoteId: string) {
 /** One of the team's quotes at a revision (the latest by default). */
 export async function findTeamQuote(teamId: string, quoteId: string, revision?: number) {
   if (!isUuid(quoteId)) return undefined;
-  const quote = await db
-    .selectFrom("quote")
-    .innerJoin("organization", "organization.id", "quote.team_id")
-    .selectAll("quote")
-    .select("organization.name as team_name")
-    .where("quote.team_id", "=", teamId)
-    .where("quote.id", "=", quoteId)
-    .executeTakeFirst();
+  const quote = await quoteWithTeam().where("quote.team_id", "=", teamId).where("quote.id", "=", quoteId).executeTakeFirst();
   if (!quote) return undefined;
   const rev = await findRevision(quote.id, revision ?? quote.latest_revision);
   if (!rev) return undefined;
@@ -110,11 +109,7 @@ export type TeamQuoteDetail = NonNullable<Awaited<ReturnType<typeof findTeamQuot
 /** A quote sent to this customer account, at the revision they were last sent. */
 export async function findCustomerQuote(userId: string, quoteId: string) {
   if (!isUuid(quoteId)) return undefined;
-  const quote = await db
-    .selectFrom("quote")
-    .innerJoin("organization", "organization.id", "quote.team_id")
-    .selectAll("quote")
-    .select("organization.name as team_name")
+  const quote = await quoteWithTeam()
     .where("quote.customer_user_id", "=", userId)
     .where("quote.id", "=", quoteId)
     .where("quote.sent_revision", "is not", null)

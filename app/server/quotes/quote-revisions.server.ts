@@ -14,18 +14,17 @@ export interface RevisionContent {
   lines: EnteredLine[];
 }
 
-export async function insertRevision(
-  trx: Executor,
-  args: {
-    quoteId: string;
-    revision: number;
-    planRevision: number;
-    currency: string;
-    snapshot: QuotePlanSnapshot;
-    userId: string | null;
-    content: RevisionContent;
-  },
-) {
+export interface RevisionArgs {
+  quoteId: string;
+  revision: number;
+  planRevision: number;
+  currency: string;
+  snapshot: QuotePlanSnapshot;
+  userId: string | null;
+  content: RevisionContent;
+}
+
+export async function insertRevision(trx: Executor, args: RevisionArgs) {
   const { content } = args;
   const totals = priceEnteredLines(content.lines, content.defaults, args.currency, content.depositPct);
   const row = await trx
@@ -76,19 +75,7 @@ export async function insertRevision(
 }
 
 /** Replaces an unsent revision's content (the draft is edited in place; a sent one never is). */
-export async function replaceDraftRevision(
-  trx: Executor,
-  args: {
-    revisionId: string;
-    quoteId: string;
-    revision: number;
-    planRevision: number;
-    currency: string;
-    snapshot: QuotePlanSnapshot;
-    userId: string | null;
-    content: RevisionContent;
-  },
-) {
+export async function replaceDraftRevision(trx: Executor, args: RevisionArgs & { revisionId: string }) {
   await trx.deleteFrom("quote_revision").where("id", "=", args.revisionId).where("sent_at", "is", null).execute();
   return insertRevision(trx, args);
 }

@@ -6,6 +6,7 @@ import { env } from "../env.server";
 import { sendMail } from "../mail.server";
 import { changeQuoteStatus, type QuoteActor } from "./quote-events.server";
 import { ensureCustomerAccount, newAccessToken } from "./customer-account.server";
+import { quoteWithTeam } from "./quote-queries.server";
 import { formatMoney, money } from "~/domain/money/money";
 import { effectiveStatus, formatQuoteNumber, STATUS_LABELS, teamCanSend, teamCanWithdraw } from "~/domain/quotes/quote-status";
 import { todayIso } from "~/domain/sourcing/offer-validity";
@@ -29,15 +30,7 @@ export async function sendQuote(teamId: string, actor: QuoteActor, quoteId: stri
   const account = await ensureCustomerAccount(pre.customer_email, pre.customer_name);
   try {
     return await db.transaction().execute(async (trx) => {
-      const quote = await trx
-        .selectFrom("quote")
-        .innerJoin("organization", "organization.id", "quote.team_id")
-        .selectAll("quote")
-        .select("organization.name as team_name")
-        .where("quote.team_id", "=", teamId)
-        .where("quote.id", "=", quoteId)
-        .forUpdate("quote")
-        .executeTakeFirstOrThrow();
+      const quote = await quoteWithTeam(trx).where("quote.team_id", "=", teamId).where("quote.id", "=", quoteId).forUpdate("quote").executeTakeFirstOrThrow();
       const rev = await trx
         .selectFrom("quote_revision")
         .select(["id", "revision", "sent_at", "gross", "deposit", "deposit_pct", (eb) => eb.cast<string>("valid_until", "text").as("valid_until")])
@@ -107,15 +100,7 @@ function isMailError(error: unknown) {
 
 export async function withdrawQuote(teamId: string, actor: QuoteActor, quoteId: string, reason: string): Promise<SendOutcome | null> {
   return db.transaction().execute(async (trx) => {
-    const quote = await trx
-      .selectFrom("quote")
-      .innerJoin("organization", "organization.id", "quote.team_id")
-      .selectAll("quote")
-      .select("organization.name as team_name")
-      .where("quote.team_id", "=", teamId)
-      .where("quote.id", "=", quoteId)
-      .forUpdate("quote")
-      .executeTakeFirst();
+    const quote = await quoteWithTeam(trx).where("quote.team_id", "=", teamId).where("quote.id", "=", quoteId).forUpdate("quote").executeTakeFirst();
     if (!quote) return null;
     if (!teamCanWithdraw(quote.status)) return refuse(`This quote is ${STATUS_LABELS[quote.status].toLowerCase()}: only a sent quote can be withdrawn.`);
     await trx.updateTable("quote").set({ access_token_hash: null }).where("id", "=", quote.id).execute();
