@@ -192,4 +192,32 @@ describe("quotes", () => {
     expect(refused.status).toBe(409);
     expect(refused.data.message).toContain(check.title);
   });
+
+  it("expires a sent quote after its last valid day: the customer can no longer approve it, the team can send a new date", async () => {
+    const team = await teamWithPlan("q-expiry");
+    const { quoteId, page } = await draftQuote(team);
+    const customer = await userWithRole("customer", "q-expiry-cust");
+    await team.client.action(quotePage, `/quotes/${quoteId}`, editorForm(pricedLines(page.data.editor, customer.email)), { quoteId });
+    expect((await team.client.action(quotePage, `/quotes/${quoteId}`, { intent: "send" }, { quoteId })).status).toBe(302);
+    await db.updateTable("quote_revision").set({ valid_until: "2020-01-31" }).where("quote_id", "=", quoteId).execute();
+
+    const view = await customer.client.loader(myQuote, `/my-quotes/${quoteId}`, { quoteId });
+    expect(view.data.status).toBe("expired");
+    const late = await customer.client.action(
+      myQuote,
+      `/my-quotes/${quoteId}`,
+      { intent: "approve", acceptedName: "Late Customer", confirm: "on" },
+      { quoteId },
+    );
+    expect(late.status).toBe(409);
+    const events = await db.selectFrom("quote_event").select("kind").where("quote_id", "=", quoteId).where("kind", "=", "expired").execute();
+    expect(events).toHaveLength(1);
+
+    // A new revision with a later date, sent again, can be approved.
+    const values = (await team.client.loader(quotePage, `/quotes/${quoteId}`, { quoteId })).data.editor as QuoteEditorForm;
+    expect((await team.client.action(quotePage, `/quotes/${quoteId}`, editorForm({ ...values, validUntil: "2099-01-31" }), { quoteId })).status).toBe(302);
+    expect((await team.client.action(quotePage, `/quotes/${quoteId}`, { intent: "send" }, { quoteId })).status).toBe(302);
+    const ok = await customer.client.action(myQuote, `/my-quotes/${quoteId}`, { intent: "approve", acceptedName: "On Time", confirm: "on" }, { quoteId });
+    expect(ok.status).toBe(302);
+  });
 });
