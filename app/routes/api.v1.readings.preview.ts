@@ -9,6 +9,11 @@ import { jsonError, readJsonBody } from "~/server/json-body.server";
 import { findReadableModule } from "~/server/readings/reading-queries.server";
 import { moduleForEngine } from "~/server/readings/submit-reading.server";
 
+// Without a loader a GET would fall through to React Router's "Unexpected Server Error" 400.
+export function loader() {
+  return jsonError(405, "Use POST with the reading as JSON.");
+}
+
 export async function action({ request }: Route.ActionArgs) {
   if (request.method !== "POST") return jsonError(405, "Use POST.");
   await requireApiActor(request);

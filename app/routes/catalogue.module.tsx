@@ -12,14 +12,14 @@ import { PageHeader, Panel } from "~/components/page-header";
 import { verifiedFigures } from "~/domain/catalogue/derived-figures";
 import { findModuleDetail } from "~/server/catalogue/module-detail.server";
 import { db } from "~/server/db.server";
-import { requireUser } from "~/server/guards.server";
+import { requireStaff } from "~/server/guards.server";
 
 export const meta: Route.MetaFunction = ({ data }) => [
   { title: data ? `${data.module.maker} ${data.module.model} · Catalogue · Kitwright` : "Module · Kitwright" },
 ];
 
 export async function loader({ request, params }: Route.LoaderArgs) {
-  const user = await requireUser(request);
+  const user = await requireStaff(request);
   const detail = await findModuleDetail(db, params.moduleId);
   if (!detail) throw new Response("No module with that id in the catalogue.", { status: 404 });
   return { ...detail, canEdit: user.role === "curator" };

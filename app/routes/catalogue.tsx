@@ -13,12 +13,12 @@ import { isPartKind, PART_KIND_LABELS, PART_KINDS, type PartKind } from "~/domai
 import { parsePartQuery, type PartListQuery } from "~/lib/catalogue-query";
 import { listPartPage } from "~/server/catalogue/part-list.server";
 import { db } from "~/server/db.server";
-import { requireUser } from "~/server/guards.server";
+import { requireStaff } from "~/server/guards.server";
 
 export const meta: Route.MetaFunction = () => [{ title: "Catalogue · Kitwright" }];
 
 export async function loader({ request }: Route.LoaderArgs) {
-  const user = await requireUser(request);
+  const user = await requireStaff(request);
   const params = new URL(request.url).searchParams;
   const kindParam = params.get("kind") ?? "modules";
   const kind: PartKind = isPartKind(kindParam) ? kindParam : "modules";

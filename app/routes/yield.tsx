@@ -12,14 +12,14 @@ import { YieldResults } from "~/components/yield/yield-results";
 import type { YieldResult } from "~/domain/solar/yield-types";
 import { defaultYieldForm } from "~/lib/yield-defaults";
 import { toRequestBody, type MonthRow, type YieldFormState } from "~/lib/yield-form";
-import { requireRole } from "~/server/guards.server";
+import { requireStaff } from "~/server/guards.server";
 import { listModules } from "~/server/modules.server";
 import { computeYield } from "~/server/yield.server";
 
 export const meta: Route.MetaFunction = () => [{ title: "Site yield · Kitwright" }];
 
 export async function loader({ request }: Route.LoaderArgs) {
-  await requireRole(request, "installer", "curator", "admin");
+  await requireStaff(request);
   const { items } = await listModules({ search: "", limit: 200, offset: 0 });
   // Start from the catalogue module nearest 100 W: a typical size for a small off-grid kit.
   const start = [...items].sort((a, b) => Math.abs(a.pmax_w - 100) - Math.abs(b.pmax_w - 100))[0];

@@ -54,6 +54,11 @@ export async function findMembership(userId: string): Promise<TeamMembership | n
 }
 
 /** An installer with a team. Without a team yet, they are sent to name one. */
+/** Everyone who works with the catalogue and the planner: not customers. */
+export function requireStaff(request: Request) {
+  return requireRole(request, "installer", "curator", "admin");
+}
+
 export async function requireTeamMember(request: Request) {
   const user = await requireRole(request, "installer");
   const team = await findMembership(user.id);
@@ -70,7 +75,11 @@ export async function requireTeamOwner(request: Request) {
 /** The actor behind an /api/v1 request: a team API key or a signed-in user. Anonymous → 401 JSON. */
 export type ApiActor = { kind: "api-key"; teamId: string; keyId: string } | { kind: "user"; user: SignedInUser; teamId: string | null };
 
-export async function requireApiActor(request: Request): Promise<ApiActor> {
+/**
+ * Customers see nothing but the quotes sent to them (brief, "Who uses it"): the API and the shared
+ * catalogue serve installers, curators and admins. Only /api/v1/me lets a customer ask who they are.
+ */
+export async function requireApiActor(request: Request, { allowCustomers = false } = {}): Promise<ApiActor> {
   const authorization = request.headers.get("Authorization");
   if (authorization?.startsWith("Bearer ")) {
     const key = await findTeamByApiKey(authorization.slice("Bearer ".length).trim());
@@ -79,6 +88,12 @@ export async function requireApiActor(request: Request): Promise<ApiActor> {
   }
   const user = await getSessionUser(request);
   if (!user) throw Response.json({ error: { message: "Sign in or send a team API key (Authorization: Bearer …)." } }, { status: 401 });
+  if (user.role === "customer" && !allowCustomers) {
+    throw Response.json(
+      { error: { message: "Customer accounts read the quotes sent to them at /my-quotes; the API serves installer teams." } },
+      { status: 403 },
+    );
+  }
   const team = user.role === "installer" ? await findMembership(user.id) : null;
   return { kind: "user", user, teamId: team?.teamId ?? null };
 }

@@ -12,6 +12,9 @@ import * as myQuote from "~/routes/my-quote";
 import * as myQuotes from "~/routes/my-quotes";
 import * as quotesApi from "~/routes/api.v1.quotes";
 import * as quoteApi from "~/routes/api.v1.quote";
+import * as modulesApi from "~/routes/api.v1.modules";
+import * as catalogue from "~/routes/catalogue";
+import * as meApi from "~/routes/api.v1.me";
 import { db } from "~/server/db.server";
 import type { QuoteEditorForm } from "~/lib/quote-forms";
 
@@ -153,6 +156,10 @@ describe("quotes", () => {
       (await otherCustomer.client.action(myQuote, `/my-quotes/${quoteId}`, { intent: "approve", acceptedName: "X Y", confirm: "on" }, { quoteId })).status,
     ).toBe(404);
     expect((await otherCustomer.client.loader(myQuotes, "/my-quotes")).data.quotes).toEqual([]);
+    // A customer sees nothing but what was sent to them: no catalogue, no planner API; /me still answers.
+    expect((await otherCustomer.client.loader(catalogue, "/catalogue")).status).toBe(403);
+    expect((await otherCustomer.client.loader(modulesApi, "/api/v1/modules")).status).toBe(403);
+    expect((await otherCustomer.client.loader(meApi, "/api/v1/me")).status).toBe(200);
     // A customer has no team pages.
     expect((await otherCustomer.client.loader(quotes, "/quotes")).status).toBe(403);
     expect((await otherCustomer.client.loader(quotePage, `/quotes/${quoteId}`, { quoteId })).status).toBe(403);

@@ -16,6 +16,8 @@ export interface AppInstance {
   port: number;
   child: ChildProcess;
   output: string[];
+  /** Standard output alone (the JSON request log), also part of `output`. */
+  stdout: string[];
 }
 
 export function freePort(): Promise<number> {
@@ -29,13 +31,19 @@ export function freePort(): Promise<number> {
   });
 }
 
-export async function startThrowawayStack(instanceCount: number) {
+export interface StackOptions {
+  /** Extra environment for every instance (e.g. LOG_LEVEL), over the defaults below. */
+  env?: Record<string, string>;
+}
+
+export async function startThrowawayStack(instanceCount: number, options: StackOptions = {}) {
   if (!existsSync("build/server/index.js")) throw new Error("No production build: run `npm run build` first (npm test builds before this project).");
   const binDir = findPostgresBinDir();
   const pgPort = await freePort();
   const cluster: ClusterOptions = { port: pgPort, dataDir: `/var/tmp/kitwright-pg-outage-${pgPort}` };
   rmSync(cluster.dataDir, { recursive: true, force: true });
   const instances: AppInstance[] = [];
+  const databaseUrl = `postgres://postgres@127.0.0.1:${pgPort}/kitwright`;
   async function stop() {
     await Promise.all(instances.map(stopInstance));
     stopCluster(cluster, binDir);
@@ -45,11 +53,10 @@ export async function startThrowawayStack(instanceCount: number) {
     ensureCluster(cluster, binDir);
     startCluster(cluster, binDir);
     await ensureDatabase(pgPort, "kitwright");
-    const databaseUrl = `postgres://postgres@127.0.0.1:${pgPort}/kitwright`;
     const migrate = spawnSync("node_modules/.bin/tsx", ["scripts/migrate.ts"], { env: { ...process.env, DATABASE_URL: databaseUrl }, encoding: "utf8" });
     if (migrate.status !== 0) throw new Error(`migrations failed: ${migrate.stderr}`);
     const secret = randomBytes(32).toString("base64url");
-    for (let i = 0; i < instanceCount; i++) instances.push(startInstance(await freePort(), databaseUrl, secret));
+    for (let i = 0; i < instanceCount; i++) instances.push(startInstance(await freePort(), databaseUrl, secret, options.env));
     await Promise.all(instances.map((instance) => waitForHttp(`http://127.0.0.1:${instance.port}/healthz`, 30000)));
   } catch (error) {
     await stop();
@@ -58,13 +65,15 @@ export async function startThrowawayStack(instanceCount: number) {
 
   return {
     instances,
+    /** For tests that seed or inspect the database directly. */
+    databaseUrl,
     stopDatabase: () => stopCluster(cluster, binDir),
     startDatabase: () => startCluster(cluster, binDir),
     stop,
   };
 }
 
-function startInstance(port: number, databaseUrl: string, secret: string): AppInstance {
+function startInstance(port: number, databaseUrl: string, secret: string, extraEnv: Record<string, string> = {}): AppInstance {
   const env = {
     ...process.env,
     NODE_ENV: "production",
@@ -77,12 +86,17 @@ function startInstance(port: number, databaseUrl: string, secret: string): AppIn
     ENABLE_DEV_OUTBOX: "false",
     TRUST_PROXY: "0",
     LOG_LEVEL: "error",
+    ...extraEnv,
   };
   const child = spawn(process.execPath, ["--enable-source-maps", "--import", "tsx", "scripts/serve.ts"], { env, stdio: ["ignore", "pipe", "pipe"] });
   const output: string[] = [];
-  child.stdout?.on("data", (chunk) => output.push(String(chunk)));
+  const stdout: string[] = [];
+  child.stdout?.on("data", (chunk) => {
+    output.push(String(chunk));
+    stdout.push(String(chunk));
+  });
   child.stderr?.on("data", (chunk) => output.push(String(chunk)));
-  return { port, child, output };
+  return { port, child, output, stdout };
 }
 
 function stopInstance({ child }: AppInstance): Promise<void> {
