@@ -18,5 +18,13 @@ export const pool = new pg.Pool({
 pool.on("error", (error) => {
   console.error(JSON.stringify({ level: "error", msg: "idle database client failed", error: error.message }));
 });
+// The same for a client that is checked out but between queries (inside a transaction, waiting on the
+// app) when the server ends its connection: the query that follows fails and is answered 503; the
+// event itself must not kill the process.
+pool.on("connect", (client) => {
+  client.on("error", (error) => {
+    console.error(JSON.stringify({ level: "error", msg: "database connection ended while in use", error: error.message }));
+  });
+});
 
 export const db = new Kysely<Database>({ dialect: new PostgresDialect({ pool }) });
