@@ -1,6 +1,7 @@
 // A curator imports parts from a CSV file: first a check that lists every row's problems and writes
 // nothing, then an import that writes every row in one transaction, or none.
 import { data, Form, Link, useNavigation } from "react-router";
+import { CsvColumnsList, CsvTemplateLink } from "~/components/csv-columns";
 import type { Route } from "./+types/catalogue.import";
 import { ImportReportPanel } from "~/components/catalogue/import-report";
 import { FormErrors, inputClass, SubmitButton } from "~/components/form-field";
@@ -114,25 +115,9 @@ export default function CatalogueImport({ loaderData, actionData }: Route.Compon
         <Panel title="Columns">
           <p className="mb-2 text-sm text-ink-soft">
             The first row names the columns (any order). Numbers use a decimal point.{" "}
-            <a
-              href={`data:text/csv;charset=utf-8,${encodeURIComponent(csvTemplate(kind))}`}
-              download={`kitwright-${kind}-template.csv`}
-              className="text-copper underline"
-            >
-              Download an empty template
-            </a>
+            <CsvTemplateLink csv={csvTemplate(kind)} fileName={`kitwright-${kind}-template.csv`} />
           </p>
-          <dl className="divide-y divide-rule text-sm">
-            {columns.map((c) => (
-              <div key={c.header} className="flex justify-between gap-3 py-1.5">
-                <dt className="font-mono text-xs">{c.header}</dt>
-                <dd className="text-right text-ink-soft">
-                  {c.what}
-                  {c.required ? "" : " (optional)"}
-                </dd>
-              </div>
-            ))}
-          </dl>
+          <CsvColumnsList columns={columns} />
         </Panel>
       </div>
     </>

@@ -1,6 +1,7 @@
 // Import a supplier's price list: first a check that lists every row's problems and writes nothing,
 // then an import that writes every row in one transaction, or none.
 import { data, Form, useNavigation } from "react-router";
+import { CsvColumnsList, CsvTemplateLink } from "~/components/csv-columns";
 import type { Route } from "./+types/sourcing.import";
 import { FormErrors, inputClass, SubmitButton } from "~/components/form-field";
 import { PageHeader, Panel } from "~/components/page-header";
@@ -89,26 +90,9 @@ export default function SourcingImport({ actionData }: Route.ComponentProps) {
           <p className="mb-2 text-sm text-ink-soft">
             The first row names the columns (any order). Parts are matched to the catalogue by kind, maker and model. A row for a supplier and part you already
             have replaces that offer's terms. Rows whose valid-until day has passed are refused.{" "}
-            <a
-              href={`data:text/csv;charset=utf-8,${encodeURIComponent(template())}`}
-              download="kitwright-offers-template.csv"
-              className="text-copper underline"
-            >
-              Download an empty template
-            </a>
-            , or export your offers from the overview and edit them.
+            <CsvTemplateLink csv={template()} fileName="kitwright-offers-template.csv" />, or export your offers from the overview and edit them.
           </p>
-          <dl className="divide-y divide-rule text-sm">
-            {OFFER_CSV_COLUMNS.map((c) => (
-              <div key={c.header} className="flex justify-between gap-3 py-1.5">
-                <dt className="font-mono text-xs">{c.header}</dt>
-                <dd className="text-right text-ink-soft">
-                  {c.what}
-                  {c.required ? "" : " (optional)"}
-                </dd>
-              </div>
-            ))}
-          </dl>
+          <CsvColumnsList columns={OFFER_CSV_COLUMNS} />
         </Panel>
       </div>
     </>
