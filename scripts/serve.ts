@@ -9,6 +9,7 @@ import compression from "compression";
 import express, { type NextFunction, type Request, type Response } from "express";
 import type { ServerBuild } from "react-router";
 import { withDatabaseOutageAs503 } from "../app/server/database-outage.server";
+import { withRequestLimits } from "../app/server/request-limits.server";
 import { clientIpHeader, refuseCrossOriginWrites, trustProxySetting } from "./lib/request-guards";
 import { securityHeaders } from "./lib/security-headers";
 
@@ -37,8 +38,10 @@ function requestLog(req: Request, res: Response, next: NextFunction) {
   next();
 }
 
-// Database outages answer 503 from any loader or action (app/server/database-outage.server.ts).
-const build = withDatabaseOutageAs503((await import(pathToFileURL(buildPath).href)) as ServerBuild);
+// Database outages answer 503 from any loader or action (app/server/database-outage.server.ts);
+// oversized bodies, runaway form field names and NUL characters are refused before any route runs
+// (app/server/request-limits.server.ts).
+const build = withRequestLimits(withDatabaseOutageAs503((await import(pathToFileURL(buildPath).href)) as ServerBuild));
 const app = express();
 app.disable("x-powered-by");
 app.set("trust proxy", trustProxySetting(process.env.TRUST_PROXY));

@@ -1,12 +1,14 @@
 import { isRouteErrorResponse, Link } from "react-router";
 
 const TEXT: Record<number, { title: string; body: string }> = {
+  400: { title: "Kitwright could not use what was sent", body: "Part of the request was not in a form Kitwright accepts. Go back, check it and try again." },
   401: { title: "Please sign in", body: "This page needs you to be signed in." },
   403: {
     title: "Not open to your account",
     body: "Your account does not have access to this page. If you think it should, ask your team's owner or the service admin.",
   },
   404: { title: "Nothing here", body: "We could not find that page. It may have moved, or the link may be mistyped." },
+  413: { title: "Too large to accept", body: "What was sent is larger than Kitwright accepts; nothing was saved." },
   503: { title: "Briefly unavailable", body: "Kitwright cannot reach its database right now. Please try again in a moment." },
 };
 

@@ -1,6 +1,7 @@
 // A load sheet as the editor submits it (JSON in a hidden field) and as the API takes it.
 import { z } from "zod";
 import { applianceIssues } from "~/domain/load/load-sheet";
+import { jsonTextProblem } from "./text-checks";
 
 const applianceSchema = z
   .object({
@@ -42,6 +43,8 @@ export function parseLoadSheetForm(formData: FormData) {
   } catch {
     return { success: false as const, fields: { sheet: "The load sheet could not be read; reload the page and try again." } };
   }
+  const unstorable = jsonTextProblem(value, "A name");
+  if (unstorable) return { success: false as const, fields: { sheet: unstorable } };
   const parsed = loadSheetSchema.safeParse(value);
   if (parsed.success) return { success: true as const, data: parsed.data };
   const fields: Record<string, string> = {};

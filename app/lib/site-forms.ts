@@ -59,6 +59,8 @@ export const siteFormSchema = z
   // a field that already has a message gets no second one.
   .superRefine(
     (site, ctx) => {
+      // Runs even when the body is not an object at all (JSON null, a number): nothing to cross-check.
+      if (typeof site !== "object" || site === null) return;
       const taken = new Set(ctx.issues.map((i) => (i.path ?? []).join(".")));
       const add = (path: (string | number)[], message: string) => {
         const key = path.join(".");

@@ -179,6 +179,11 @@ export function checkOfferCsv(text: string, asOf: string): OfferCsvCheck {
     check.fileErrors.push(`The file is larger than ${MAX_OFFER_CSV_BYTES / 1024 / 1024} MiB; split it into smaller files.`);
     return check;
   }
+  // A NUL byte never occurs in text (and PostgreSQL text cannot store it): this is not a CSV file.
+  if (text.includes("\0")) {
+    check.fileErrors.push("The file contains NUL characters (byte 0): it is not a plain-text CSV file. Save it as CSV and try again.");
+    return check;
+  }
   const records = Papa.parse<string[]>(text.replace(/^\uFEFF/, ""), { header: false, skipEmptyLines: false }).data;
   const headerIndex = records.findIndex((r) => r.some((cell) => cell.trim() !== ""));
   if (headerIndex < 0) {

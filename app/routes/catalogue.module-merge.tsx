@@ -16,6 +16,7 @@ import { listModulePage } from "~/server/catalogue/module-list.server";
 import { db } from "~/server/db.server";
 import { redirectWithFlash } from "~/server/flash.server";
 import { requireRole } from "~/server/guards.server";
+import { isUuid } from "~/server/modules.server";
 
 export const meta: Route.MetaFunction = () => [{ title: "Merge a duplicate · Catalogue · Kitwright" }];
 
@@ -35,6 +36,7 @@ export async function action({ request, params }: Route.ActionArgs) {
   const submission = parseWithZod(await request.formData(), { schema: mergeFormSchema });
   if (submission.status !== "success") return data({ result: submission.reply() }, { status: 400 });
   const duplicateId = params.moduleId;
+  if (!isUuid(duplicateId)) throw new Response("No module with that id in the catalogue.", { status: 404 });
   const { survivorId } = submission.value;
   const names = await db.selectFrom("pv_module").select(["id", "maker", "model"]).where("id", "in", [duplicateId, survivorId]).execute();
   if (!names.some((n) => n.id === duplicateId)) throw new Response("No module with that id in the catalogue.", { status: 404 });

@@ -14,6 +14,7 @@ import { approveSchema, declineSchema } from "~/lib/quote-forms";
 import { env } from "~/server/env.server";
 import { redirectWithFlash } from "~/server/flash.server";
 import { requireUser } from "~/server/guards.server";
+import { isUuid } from "~/server/modules.server";
 import { startDepositCheckout } from "~/server/quotes/deposit-checkout.server";
 import { decideQuote, noteExpiry, recordViewed } from "~/server/quotes/quote-decisions.server";
 import { toQuoteDocument } from "~/server/quotes/quote-document.server";
@@ -49,6 +50,8 @@ export async function loader({ request, params }: Route.LoaderArgs) {
 
 export async function action({ request, params }: Route.ActionArgs) {
   const user = await requireUser(request);
+  // The id reaches uuid columns in every branch below; anything else is no quote at all.
+  if (!isUuid(params.quoteId)) throw new Response(NOT_YOURS, { status: 404 });
   const actor = { userId: user.id, name: user.name };
   const formData = await request.formData();
   const intent = formData.get("intent");

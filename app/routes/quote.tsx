@@ -13,6 +13,7 @@ import { todayIso } from "~/domain/sourcing/offer-validity";
 import { quoteEditorSchema } from "~/lib/quote-forms";
 import { redirectWithFlash } from "~/server/flash.server";
 import { requireTeamMember } from "~/server/guards.server";
+import { isUuid } from "~/server/modules.server";
 import { noteExpiry } from "~/server/quotes/quote-decisions.server";
 import { toQuoteDocument } from "~/server/quotes/quote-document.server";
 import { editorValues } from "~/server/quotes/quote-editor-values.server";
@@ -53,6 +54,8 @@ export async function loader({ request, params }: Route.LoaderArgs) {
 
 export async function action({ request, params }: Route.ActionArgs) {
   const { user, team } = await requireTeamMember(request);
+  // The id reaches uuid columns in every branch below; anything else is no quote at all.
+  if (!isUuid(params.quoteId)) throw new Response("There is no such quote in your team.", { status: 404 });
   const actor = { userId: user.id, name: user.name };
   const formData = await request.formData();
   const intent = formData.get("intent");

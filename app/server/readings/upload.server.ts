@@ -2,6 +2,7 @@
 // read, and the stream is counted as it arrives, so a client that lies or streams without a length
 // still cannot make the server buffer more than the limit.
 import { PHOTO_MAX_BYTES } from "~/lib/image-type";
+import { drainBody } from "../request-limits.server";
 
 /** A 5 MB photo plus the CSV and the fields fit well under this. */
 export const MAX_UPLOAD_BYTES = PHOTO_MAX_BYTES + 1024 * 1024;
@@ -13,10 +14,15 @@ export class UploadTooLargeError extends Error {
 }
 
 export async function readLimitedFormData(request: Request, maxBytes = MAX_UPLOAD_BYTES): Promise<FormData> {
-  const declared = Number(request.headers.get("Content-Length") ?? "");
-  if (Number.isFinite(declared) && declared > maxBytes) throw new UploadTooLargeError(maxBytes);
   if (!request.body) return request.formData();
   const reader = request.body.getReader();
+  const declared = Number(request.headers.get("Content-Length") ?? "");
+  // The rest is read and thrown away (up to a limit) rather than cancelled: cancelling closes the
+  // connection while the client is still sending, and the 413 answer is lost in the reset.
+  if (Number.isFinite(declared) && declared > maxBytes) {
+    await drainBody(reader);
+    throw new UploadTooLargeError(maxBytes);
+  }
   const chunks: Uint8Array[] = [];
   let total = 0;
   for (;;) {
@@ -24,7 +30,7 @@ export async function readLimitedFormData(request: Request, maxBytes = MAX_UPLOA
     if (done) break;
     total += value.byteLength;
     if (total > maxBytes) {
-      await reader.cancel();
+      await drainBody(reader, total);
       throw new UploadTooLargeError(maxBytes);
     }
     chunks.push(value);
