@@ -1,9 +1,9 @@
 // GET /api/v1/modules with filters and sorts at catalogue scale: the bench database (already seeded
-// with the demo) gets 10 000 generated modules and 100 000 approved readings, then each query runs
-// under 32 connections with a team API key. Target: p95 < 50 ms.
+// with the demo) gets 10 000 generated modules and 100 000 approved readings, then each query is
+// loaded with a team API key. Target: p95 < 50 ms.
 import { spawnSync } from "node:child_process";
 import { BENCH_PORTS } from "./http-stack";
-import { load, type LoadFigures } from "./http-yield";
+import type { LoadTarget } from "./load";
 import { appEnv } from "../lib/services";
 import { databaseUrl } from "../../tests/setup/test-env";
 
@@ -19,50 +19,31 @@ export const CATALOGUE_QUERIES: { name: string; query: string }[] = [
   { name: "search a model code + W range, by nameplate W", query: "q=GM-0042&minW=50&sort=pmaxW&dir=desc&limit=50" },
 ];
 
-export interface CatalogueBenchRun {
-  name: string;
-  query: string;
-  total: number;
-  figures: LoadFigures;
-}
-
 /** The database bootBenchStack made (scripts/bench/http-stack.ts). */
 export const BENCH_DATABASE_URL = databaseUrl("kitwright_bench");
 
-export async function benchCatalogueApi(opts: { apiKey: string; seconds: number; databaseUrl?: string; log?: (line: string) => void }) {
-  const log = opts.log ?? console.log;
+/** Adds the generated modules and readings; returns the seed script's summary line. */
+export function seedCatalogueAtScale(databaseUrl = BENCH_DATABASE_URL) {
   const seeded = spawnSync("node_modules/.bin/tsx", ["scripts/seed.ts", "--scale", String(CATALOGUE_SCALE)], {
     stdio: ["ignore", "pipe", "inherit"],
     encoding: "utf8",
-    env: { ...process.env, ...appEnv(BENCH_PORTS, opts.databaseUrl ?? BENCH_DATABASE_URL) },
+    env: { ...process.env, ...appEnv(BENCH_PORTS, databaseUrl) },
   });
   if (seeded.status !== 0) throw new Error("seeding the catalogue at scale failed");
-  const scaleLine = seeded.stdout.split("\n").find((l) => l.startsWith("scale:"));
-  if (scaleLine) log(`  ${scaleLine}`);
+  return seeded.stdout.split("\n").find((l) => l.startsWith("scale:")) ?? "";
+}
 
-  const headers = { Authorization: `Bearer ${opts.apiKey}` };
-  const runs: CatalogueBenchRun[] = [];
+/** One target per query, each checked once (200 with items) before it is loaded. */
+export async function catalogueTargets(apiKey: string): Promise<LoadTarget[]> {
+  const headers = { Authorization: `Bearer ${apiKey}` };
+  const targets: LoadTarget[] = [];
   for (const { name, query } of CATALOGUE_QUERIES) {
     const url = `http://127.0.0.1:${BENCH_PORTS.app}/api/v1/modules?${query}`;
     const check = await fetch(url, { headers });
     const body = (await check.json()) as { total?: number; items?: unknown[] };
     if (check.status !== 200 || !body.items?.length)
       throw new Error(`catalogue API answered ${check.status} with ${body.items?.length ?? 0} items for ${query}`);
-    runs.push({ name, query, total: body.total ?? 0, figures: await load({ url, headers, seconds: opts.seconds }) });
+    targets.push({ name: `GET /api/v1/modules: ${name} (${body.total} match)`, server: "app", url, headers });
   }
-  return runs;
-}
-
-/** Runs the catalogue benchmark and prints one row per query, as `npm run bench` prints the others. */
-export async function reportCatalogueBench(opts: { apiKey: string; seconds: number; databaseUrl?: string }) {
-  console.log(
-    `\n━━ Catalogue API at ${CATALOGUE_SCALE.toLocaleString("en-GB")} modules (autocannon, 32 connections, ${opts.seconds} s per query; target p95 < 50 ms)`,
-  );
-  for (const run of await benchCatalogueApi(opts)) {
-    const f = run.figures;
-    console.log(`  ${run.name} (${run.total} matching)`);
-    console.log(
-      `    ${f.requestsPerSecond.toFixed(0).padStart(7)} req/s   p50 ${f.p50Ms.toFixed(1).padStart(6)} ms   p95 ${f.p95Ms.toFixed(1).padStart(6)} ms   p99 ${f.p99Ms.toFixed(1).padStart(6)} ms   errors ${f.errors}   non-2xx ${f.non2xx}`,
-    );
-  }
+  return targets;
 }

@@ -8,6 +8,7 @@ import { databaseUrl, TEST_CLUSTER } from "../../tests/setup/test-env";
 import { ensureCluster, ensureDatabase, findPostgresBinDir, startCluster, stopCluster } from "../lib/postgres-cluster";
 import { startProcess, stopAll, waitForHttp } from "../lib/processes";
 import { appEnv, startAppServer, startFakes, type ServicePorts } from "../lib/services";
+import { memoryReportNodeOptions, removeMemoryReports } from "./server-memory";
 
 export const BENCH_PORTS: ServicePorts = { app: 3320, smtp: 2725, mailHttp: 2790, payments: 12311 };
 export const BARE_PORT = 3321;
@@ -28,7 +29,8 @@ export async function bootBenchStack() {
   run("node_modules/.bin/tsx", ["scripts/seed.ts"], env);
   if (!existsSync("build/server/index.js") || process.env.BENCH_BUILD !== "0") run("node_modules/.bin/react-router", ["build"], {});
   await startFakes(env, BENCH_PORTS);
-  const server = await startAppServer({ ...env, LOG_LEVEL: "error" }, BENCH_PORTS);
+  // SIGUSR2 makes the server write a diagnostic report: the bench reads its V8 heap from it.
+  const server = await startAppServer({ ...env, LOG_LEVEL: "error", NODE_OPTIONS: memoryReportNodeOptions() }, BENCH_PORTS);
   startProcess("bare", "node_modules/.bin/tsx", ["scripts/bench/bare-server.ts"], { PORT: String(BARE_PORT) }, { quiet: true });
   await waitForHttp(`http://127.0.0.1:${BARE_PORT}/`);
 
@@ -49,8 +51,10 @@ export async function bootBenchStack() {
     apiKey: key,
     moduleId: module.rows[0].id as string,
     serverPid: server.child.pid!,
+    publicUrl: env.PUBLIC_URL!,
     stop() {
       stopAll();
+      removeMemoryReports();
       if (startedHere) stopCluster(TEST_CLUSTER, binDir);
     },
   };

@@ -1,15 +1,18 @@
-// npm run bench — prints performance figures (no pass/fail): the engine's timings, then HTTP load
-// on the production server. BENCH_SECONDS sets each HTTP run's length (default 10).
+// npm run bench — prints performance figures (no pass/fail): the engine's timings, then HTTP load on
+// the production server: the bare node:http yardstick, the yield API, the catalogue API at 10 000
+// modules and a signed-in page, each under 32 connections for BENCH_SECONDS (default 60) seconds.
 import { spawnSync } from "node:child_process";
+import { catalogueTargets, CATALOGUE_SCALE, seedCatalogueAtScale } from "./http-catalogue";
+import { signedInPageTarget } from "./http-page";
+import { printHttpTable, printHttpTargets, type RunResult } from "./http-report";
 import { bootBenchStack } from "./http-stack";
-import { benchYieldApi, rssMb, type LoadFigures } from "./http-yield";
+import { bareTarget, yieldTarget } from "./http-yield";
+import { load, type LoadTarget } from "./load";
 import { printPlanBench } from "./plan";
+import { readServerMemory } from "./server-memory";
 
-const seconds = Number(process.env.BENCH_SECONDS ?? 10);
-
-function row(name: string, f: LoadFigures) {
-  return `  ${name.padEnd(26)} ${f.requestsPerSecond.toFixed(0).padStart(7)} req/s   p50 ${f.p50Ms.toFixed(1).padStart(6)} ms   p95 ${f.p95Ms.toFixed(1).padStart(6)} ms   p99 ${f.p99Ms.toFixed(1).padStart(6)} ms   errors ${f.errors}   non-2xx ${f.non2xx}`;
-}
+const seconds = Number(process.env.BENCH_SECONDS ?? 60);
+const CONNECTIONS = 32;
 
 console.log("━━ Engine (pure TypeScript, one core)");
 spawnSync("node_modules/.bin/tsx", ["scripts/bench/engine.ts"], { stdio: "inherit" });
@@ -26,16 +29,38 @@ console.log("\n━━ Sourcing (pure TypeScript, one core)");
 console.log("\n━━ Kit alternatives (pure TypeScript, one core)");
 (await import("./alternatives")).printAlternativesBench();
 
-console.log(`\n━━ HTTP (autocannon, 32 connections, ${seconds} s per run)`);
+console.log(`\n━━ HTTP (autocannon, ${CONNECTIONS} connections, ${seconds} s per run; set BENCH_SECONDS to shorten)`);
 const stack = await bootBenchStack();
 try {
-  const memoryStartMb = rssMb(stack.serverPid);
-  const yieldRun = await benchYieldApi(stack.apiKey, stack.moduleId, seconds);
-  console.log(row("bare node:http JSON", yieldRun.bare));
-  console.log(row("POST /api/v1/yield", yieldRun.api));
-  console.log(`  ratio (yield API / bare)   ${yieldRun.ratio.toFixed(3)}   (target ≥ 0.10 with p99 < 50 ms)`);
-  console.log(`  app server memory (RSS)    ${memoryStartMb.toFixed(0)} MB at start → ${rssMb(stack.serverPid).toFixed(0)} MB at end`);
-  await (await import("./http-catalogue")).reportCatalogueBench({ apiKey: stack.apiKey, seconds });
+  console.log(`  catalogue at ${CATALOGUE_SCALE.toLocaleString("en-GB")} modules — ${seedCatalogueAtScale()}`);
+  const catalogue = await catalogueTargets(stack.apiKey);
+  const targets: (LoadTarget & { label: string })[] = [
+    { ...bareTarget(stack.moduleId), label: "bare node:http" },
+    { ...(await yieldTarget(stack)), label: "POST /api/v1/yield" },
+    ...catalogue.map((target, i) => ({ ...target, label: `GET /api/v1/modules #${i + 1}` })),
+    { ...(await signedInPageTarget(stack.publicUrl)), label: "GET /quotes (signed in)" },
+  ];
+  // A freshly started server still compiles and grows its heap: each app target is loaded briefly
+  // first, so that the memory at the start of the measured runs is that of a warm server.
+  const warmUpSeconds = Math.max(1, Math.round(seconds / 12));
+  for (const target of targets.filter((t) => t.server === "app")) await load({ ...target, seconds: warmUpSeconds, connections: CONNECTIONS });
+  console.log(
+    `  (warmed up ${warmUpSeconds} s per target; between runs the app server writes a diagnostic report for its heap figure, and Node says so on stderr)`,
+  );
+  const results: RunResult[] = [];
+  let memory = await readServerMemory(stack.serverPid);
+  for (const target of targets) {
+    const figures = await load({ ...target, seconds, connections: CONNECTIONS });
+    if (target.server === "app") {
+      const start = memory;
+      memory = await readServerMemory(stack.serverPid);
+      results.push({ target, figures, memory: { start, end: memory } });
+    } else results.push({ target, figures });
+    console.log(`  … ${target.label}: ${figures.requestsPerSecond.toFixed(0)} req/s`);
+  }
+  console.log("");
+  printHttpTable(results);
+  printHttpTargets(results);
 } finally {
   stack.stop();
 }

@@ -1,10 +1,11 @@
-import { describe, expect, it } from "vitest";
+import { describe, expect, it, vi } from "vitest";
 import { RouteClient } from "./helpers/route-client";
 import { installerWithTeam, signUpUser } from "./helpers/fixtures";
 import { auth } from "~/server/auth.server";
 import * as teamApiKeys from "~/routes/team-api-keys";
 import * as me from "~/routes/api.v1.me";
 import { db } from "~/server/db.server";
+import { createApiKey } from "~/server/api-keys.server";
 
 async function callMe(headers: Record<string, string>) {
   const client = new RouteClient();
@@ -38,6 +39,20 @@ describe("team API keys", () => {
     const refused = await callMe({ Authorization: `Bearer ${key}` });
     expect(refused.status).toBe(401);
     expect((await refused.json()).error.message).toMatch(/revoked/);
+  });
+
+  it("stops accepting a key revoked by another instance within five seconds", async () => {
+    const owner = await installerWithTeam("keys4");
+    const { id, key } = await createApiKey(owner.teamId, "Shared integration", owner.userId);
+    expect((await callMe({ Authorization: `Bearer ${key}` })).status).toBe(200);
+    // What another instance's revocation leaves behind: the row changed, this process not told.
+    await db.updateTable("team_api_key").set({ revoked_at: new Date() }).where("id", "=", id).execute();
+    vi.useFakeTimers({ toFake: ["Date"], now: Date.now() + 5_001 });
+    try {
+      expect((await callMe({ Authorization: `Bearer ${key}` })).status).toBe(401);
+    } finally {
+      vi.useRealTimers();
+    }
   });
 
   it("answers 401 JSON to anonymous and made-up keys, and a bad key id gets a field error, not a crash", async () => {
