@@ -2,6 +2,8 @@
 // balancer share sessions and attempt limits and refuse cross-site writes; when PostgreSQL stops,
 // both answer 503 at once (page or JSON), stay up, and serve again by themselves when it returns.
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import Stripe from "stripe";
+import { openDatabase } from "./helpers/access-world";
 import { call, cookiesOf, type CallOptions } from "./helpers/http";
 import { PUBLIC_HOST, PUBLIC_URL, startThrowawayStack } from "./helpers/throwaway-stack";
 import { SIGN_IN_LIMITS } from "~/server/auth-attempts.server";
@@ -74,6 +76,36 @@ describe("two instances, one database", () => {
     expect((await call(b, PUBLIC_HOST, "/api/v1/payments/webhook", { json: {} })).status).not.toBe(403);
     // Still signed in: the refused sign-out did nothing.
     expect((await get(a, "/api/v1/me", { headers: { Cookie: cookie } })).status).toBe(200);
+  });
+});
+
+describe("payments webhook on two instances", () => {
+  it("records one event however many times, and on whichever instance, it is delivered; forged → 400 on both", async () => {
+    const event = {
+      id: `evt_test_twin_${Date.now().toString(36)}`,
+      object: "event",
+      type: "checkout.session.completed",
+      created: Math.floor(Date.now() / 1000),
+      data: { object: { id: `cs_test_twin_${Date.now().toString(36)}`, object: "checkout.session", payment_status: "paid", status: "complete", metadata: {} } },
+    };
+    const payload = JSON.stringify(event);
+    const deliver = (port: number, secret = "whsec_local_fake_secret") =>
+      // call() sends JSON.stringify(event): the very bytes signed here.
+      call(port, PUBLIC_HOST, "/api/v1/payments/webhook", {
+        json: event,
+        headers: { "Stripe-Signature": Stripe.webhooks.generateTestHeaderString({ payload, secret }) },
+      });
+    const answers = await Promise.all(Array.from({ length: 10 }, (_, i) => deliver(i % 2 === 0 ? a : b)));
+    expect(answers.map((x) => x.status)).toEqual(Array(10).fill(200));
+    const db = openDatabase(stack.databaseUrl);
+    try {
+      const rows = await db.selectFrom("payment_webhook_event").selectAll().where("event_id", "=", event.id).execute();
+      expect(rows).toHaveLength(1);
+      expect(await db.selectFrom("quote_payment").select("id").execute()).toEqual([]);
+    } finally {
+      await db.destroy();
+    }
+    for (const port of [a, b]) expect((await deliver(port, "whsec_forged_secret")).status).toBe(400);
   });
 });
 
