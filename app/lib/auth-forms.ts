@@ -1,5 +1,6 @@
 // Form schemas shared by the browser (Conform's client validation) and the server actions.
 import { z } from "zod";
+import { nameField } from "./name-field";
 
 const email = z
   .email("Enter a valid e-mail address.")
@@ -33,13 +34,8 @@ export const resetPasswordSchema = z
   .refine((v) => v.password === v.confirm, { path: ["confirm"], message: "The two passwords differ." });
 
 export const teamNameSchema = z.object({
-  name: z
-    .string({ error: "Name your team." })
-    .trim()
-    .min(2, "Use at least 2 characters.")
-    .max(80, "Use at most 80 characters.")
-    // Zero-width and other invisible characters alone would show as a blank name in e-mails and pages.
-    .refine((name) => /[\p{L}\p{N}]/u.test(name), "Use at least one letter or digit."),
+  // Zero-width and other invisible characters alone would show as a blank name in e-mails and pages.
+  name: nameField("Name your team.", { max: 80, tooLong: "Use at most 80 characters." }),
 });
 
 export const inviteSchema = z.object({

@@ -2,10 +2,11 @@
 import { z } from "zod";
 import { applianceIssues } from "~/domain/load/load-sheet";
 import { jsonTextProblem } from "./text-checks";
+import { nameField } from "./name-field";
 
 const applianceSchema = z
   .object({
-    name: z.string({ error: "Give the appliance a name." }).trim().min(1, "Give the appliance a name.").max(80),
+    name: nameField("Give the appliance a name.", { min: 1, max: 80 }),
     powerW: z
       .number({ error: "Power must be a number of watts." })
       .min(0, "Power must be 0 W or more.")
@@ -28,7 +29,7 @@ const applianceSchema = z
   });
 
 export const loadSheetSchema = z.object({
-  name: z.string({ error: "Name the load sheet." }).trim().min(2, "Use at least 2 characters.").max(120),
+  name: nameField("Name the load sheet."),
   appliances: z.array(applianceSchema).min(1, "Add at least one appliance.").max(200, "At most 200 appliances."),
 });
 

@@ -1,6 +1,7 @@
 // What the installer chooses for a kit plan: the site and load sheet, the system voltage, the parts
 // and the design choices. One schema for the plan form, the live re-plan and the API.
 import { z } from "zod";
+import { nameField } from "./name-field";
 
 const uuid = z.uuid("Choose one from the list.");
 const num = (label: string, min: number, max: number, unit = "") =>
@@ -35,7 +36,7 @@ export const designSchema = z.object({
 
 export const planChoicesSchema = z
   .object({
-    name: z.string({ error: "Name the plan." }).trim().min(2, "Use at least 2 characters.").max(120),
+    name: nameField("Name the plan."),
     siteId: uuid,
     loadSheetId: uuid,
     systemVoltageV: z.union([z.literal(12), z.literal(24), z.literal(48)], { error: "The system voltage is 12, 24 or 48 V." }),

@@ -5,6 +5,7 @@ import { z } from "zod";
 import { QUOTE_LINE_KINDS } from "~/domain/quotes/quote-types";
 import { OFFER_PART_KINDS } from "~/domain/sourcing/offer-facts";
 import { decimalText, isoDateField } from "./sourcing-forms";
+import { nameField } from "./name-field";
 
 function percent(label: string, max: number, { positive = false } = {}) {
   return decimalText(label, { maxDecimals: 3, positive }).refine((v) => new Decimal(v).lte(max), `The ${label} can be at most ${max} %.`);
@@ -17,7 +18,7 @@ function linePercent(label: string, max: number) {
 
 export const quoteLineSchema = z.object({
   kind: z.enum(QUOTE_LINE_KINDS, "Choose what kind of line this is."),
-  description: z.string({ error: "Describe the line." }).trim().min(2, "Use at least 2 characters.").max(300, "Keep it under 300 characters."),
+  description: nameField("Describe the line.", { max: 300, tooLong: "Keep it under 300 characters." }),
   quantity: decimalText("quantity", { maxDecimals: 3, positive: true }),
   unitCost: decimalText("unit cost", { maxDecimals: 4 }),
   marginPct: linePercent("margin", 1000),
@@ -30,8 +31,8 @@ export const quoteLineSchema = z.object({
 export type QuoteLineForm = z.output<typeof quoteLineSchema>;
 
 export const quoteEditorSchema = z.object({
-  title: z.string({ error: "Give the quote a title." }).trim().min(2, "Use at least 2 characters.").max(160),
-  customerName: z.string({ error: "Enter the customer's name." }).trim().min(2, "Use at least 2 characters.").max(120),
+  title: nameField("Give the quote a title.", { max: 160 }),
+  customerName: nameField("Enter the customer's name."),
   customerEmail: z.email("Enter the customer's e-mail address, e.g. name@example.org.").trim().toLowerCase().max(254),
   marginPct: percent("margin", 1000),
   discountPct: percent("discount", 100),

@@ -3,6 +3,7 @@
 // so a site that saves is a site the engine accepts.
 import { z } from "zod";
 import { siteSchema } from "~/domain/solar/yield-request";
+import { nameField } from "./name-field";
 
 /** Clearness-index presets for sites without weather data (common practice, no source: round values). */
 export const CLEARNESS_PRESETS = {
@@ -32,8 +33,8 @@ const monthSchema = z.object({
 
 export const siteFormSchema = z
   .object({
-    name: z.string({ error: "Name the site." }).trim().min(2, "Use at least 2 characters.").max(120),
-    customerName: z.string({ error: "Enter the customer's name." }).trim().min(2, "Use at least 2 characters.").max(120),
+    name: nameField("Name the site."),
+    customerName: nameField("Enter the customer's name."),
     customerEmail: z.email("Enter a valid e-mail address.").max(254).optional(),
     customerPhone: z.string().trim().max(40).optional(),
     latitudeDeg: num("latitude"),

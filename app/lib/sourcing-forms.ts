@@ -5,6 +5,7 @@ import { isCurrencyCode } from "~/domain/money/money";
 import { canonicalDecimal, decimalProblem, type DecimalRules } from "~/domain/sourcing/decimal-text";
 import { OFFER_PART_KINDS } from "~/domain/sourcing/offer-facts";
 import { isIsoDate } from "~/domain/sourcing/offer-validity";
+import { nameField } from "./name-field";
 
 export const MONEY_RULES: DecimalRules = { maxDecimals: 6 };
 export const RATE_RULES: DecimalRules = { maxDecimals: 10, positive: true };
@@ -40,7 +41,7 @@ const wholeNumber = (label: string, min: number) =>
 export const isoDateField = z.string({ error: "Enter a date as YYYY-MM-DD." }).trim().refine(isIsoDate, "Enter a real date as YYYY-MM-DD, e.g. 2027-03-31.");
 
 export const supplierFormSchema = z.object({
-  name: z.string({ error: "Name the supplier." }).trim().min(2, "Use at least 2 characters.").max(120),
+  name: nameField("Name the supplier."),
   contact: z.string().trim().max(500).optional(),
   currency: currencyField,
   shippingTerms: z.string().trim().max(500).optional(),
