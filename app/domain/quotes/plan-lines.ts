@@ -49,9 +49,32 @@ export function partLine(need: PlanPartNeed, offer: ChosenOffer | null): Entered
   };
 }
 
+/**
+ * The plan's cable runs and their fuses or breakers in one line, so the quote names what was sized
+ * (two conductors a run, out and back); the installer prices it from their own cable stock.
+ */
+export function cablingLine(plan: KitPlan): EnteredLine | null {
+  const runs = plan.cables.filter((c) => c.conductor !== null);
+  if (!runs.length) return null;
+  const words = runs.map(
+    (c) => `${c.label.toLowerCase()} ${c.conductor!.label} × ${round1(2 * c.oneWayLengthM)} m${c.protectionA ? `, ${c.protectionA} A fuse` : ""}`,
+  );
+  const head = "Cables and protection as sized in the plan: ";
+  // A line's description holds 300 characters: name as many runs as fit, and say the rest are in the plan.
+  let description = head + words.join("; ");
+  for (let n = words.length - 1; description.length > 300 && n > 0; n--) description = `${head}${words.slice(0, n).join("; ")}; more in the plan`;
+  return { ...BLANK, kind: "extra", description: description.slice(0, 300), quantity: "1" };
+}
+
+function round1(value: number) {
+  return Math.round(value * 10) / 10;
+}
+
+const BLANK = { marginPct: null, discountPct: null, taxRatePct: null, partKind: null, partId: null, offerId: null, unitCost: "0" };
+
 /** Lines every installation has besides the parts; the installer fills in the costs. */
 export function startingExtraLines(): EnteredLine[] {
-  const blank = { marginPct: null, discountPct: null, taxRatePct: null, partKind: null, partId: null, offerId: null, unitCost: "0" };
+  const blank = BLANK;
   return [
     { ...blank, kind: "labour", description: "Installation labour (hours)", quantity: "8" },
     { ...blank, kind: "mounting", description: "Mounting frame and fixings", quantity: "1" },

@@ -9,7 +9,7 @@ import { loadTeamPricing } from "../sourcing/settings.server";
 import { recordQuoteEvent, type Executor, type QuoteActor } from "./quote-events.server";
 import { cheapestOffer } from "./offer-picks.server";
 import { insertRevision, type RevisionContent } from "./quote-revisions.server";
-import { partLine, partNeeds, startingExtraLines } from "~/domain/quotes/plan-lines";
+import { cablingLine, partLine, partNeeds, startingExtraLines } from "~/domain/quotes/plan-lines";
 import { planBlockers, snapshotFromPlan } from "~/domain/quotes/plan-snapshot";
 import { addDaysIso } from "~/domain/quotes/quote-dates";
 import { todayIso } from "~/domain/sourcing/offer-validity";
@@ -71,6 +71,8 @@ export async function createQuoteFromPlan(teamId: string, actor: QuoteActor, pla
     const pricing = await loadTeamPricing(trx, teamId);
     const lines = [];
     for (const need of partNeeds(revision.result, choices.data, labels)) lines.push(partLine(need, await cheapestOffer(trx, teamId, need, pricing)));
+    const cabling = cablingLine(revision.result);
+    if (cabling) lines.push(cabling);
     lines.push(...startingExtraLines());
     const last = await previousFigures(trx, teamId);
     const { max } = await trx

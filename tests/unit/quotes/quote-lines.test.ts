@@ -35,3 +35,19 @@ describe("quote lines with quote-wide defaults", () => {
     expect(moneyText(t.balance)).toBe("345.59");
   });
 });
+
+describe("the plan's cabling as a quote line", () => {
+  it("names each run's conductor, both conductors' length and its fuse, within the 300 characters a line holds", async () => {
+    const { cablingLine } = await import("~/domain/quotes/plan-lines");
+    const run = (label: string, conductor: string, oneWayLengthM: number, protectionA: number | null) =>
+      ({ label, conductor: { label: conductor }, oneWayLengthM, protectionA }) as never;
+    const plan = { cables: [run("Array to charge controller", "4 mm²", 15, 20), run("Charge controller to battery", "16 mm²", 2, 80)] } as never;
+    expect(cablingLine(plan)!.description).toBe(
+      "Cables and protection as sized in the plan: array to charge controller 4 mm² × 30 m, 20 A fuse; charge controller to battery 16 mm² × 4 m, 80 A fuse",
+    );
+    const many = { cables: Array.from({ length: 12 }, (_, i) => run(`Run number ${i} with a long name`, "10 mm²", 12.5, 63)) } as never;
+    const line = cablingLine(many)!;
+    expect(line.description.length).toBeLessThanOrEqual(300);
+    expect(line.description).toMatch(/more in the plan$/);
+  });
+});
