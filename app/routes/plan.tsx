@@ -111,7 +111,8 @@ export default function PlanPage({ loaderData, actionData }: Route.ComponentProp
         actions={
           l.isLatest ? (
             <span className="flex flex-col items-end gap-1">
-              <Form method="post" action="/quotes">
+              {/* A whole-page post: it leaves the plan editor (and any live preview still in flight) behind for good. */}
+              <Form method="post" action="/quotes" reloadDocument>
                 <input type="hidden" name="planId" value={l.planId} />
                 <button type="submit" className="rounded-md bg-copper px-3 py-1.5 text-sm font-medium text-sheet hover:bg-copper-dark">
                   Quote this plan

@@ -17,6 +17,7 @@ import { isUuid } from "~/server/modules.server";
 import { noteExpiry } from "~/server/quotes/quote-decisions.server";
 import { toQuoteDocument } from "~/server/quotes/quote-document.server";
 import { editorValues } from "~/server/quotes/quote-editor-values.server";
+import { lineOfferChoices } from "~/server/quotes/line-offers.server";
 import { findTeamQuote } from "~/server/quotes/quote-queries.server";
 import { saveQuoteEdits } from "~/server/quotes/quote-save.server";
 import { sendQuote, withdrawQuote } from "~/server/quotes/quote-send.server";
@@ -36,15 +37,18 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   const rev = found.revision;
   const status = effectiveStatus(found.quote.status, rev.valid_until, todayIso());
   const isLatest = rev.revision === found.quote.latest_revision;
+  const editable = isLatest && teamCanRevise(found.quote.status);
+  const editor = editorValues(found.quote, rev);
   return {
     quote: found.quote,
     status,
     revision: rev.revision,
-    editable: isLatest && teamCanRevise(found.quote.status),
+    editable,
     canSend: isLatest && teamCanSend(found.quote.status),
     canWithdraw: teamCanWithdraw(found.quote.status),
     revisionSent: rev.sent_at !== null,
-    editor: editorValues(found.quote, rev),
+    editor,
+    offerChoices: editable ? await lineOfferChoices(team.teamId, editor.lines) : {},
     doc: toQuoteDocument(found.quote, rev),
     events: found.events,
     payments: found.payments,
@@ -127,6 +131,7 @@ export default function QuotePage({ loaderData, actionData }: Route.ComponentPro
               defaultValue={loaderData.editor}
               lastResult={actionData?.result}
               currency={quote.currency}
+              offerChoices={loaderData.offerChoices}
               sentRevision={loaderData.revisionSent ? revision : null}
             />
           ) : (

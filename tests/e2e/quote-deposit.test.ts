@@ -19,6 +19,17 @@ it("sends a quote, and the customer approves it and pays the deposit by card", a
     const quoteUrl = new URL(page.url()).pathname;
     await page.getByText("Quote drafted from the plan").waitFor();
 
+    // Each kit part names the offer its cost comes from; another offer brings its own landed cost.
+    const picker = page.getByLabel("Line 1 offer");
+    const options = picker.locator("option");
+    expect(await options.count()).toBeGreaterThan(0);
+    if ((await options.count()) > 1) {
+      const second = (await options.nth(1).textContent()) ?? "";
+      await picker.selectOption({ index: 1 });
+      const cost = /([\d.]+) a unit landed/.exec(second)![1];
+      expect(await page.getByLabel("Line 1 unit cost").inputValue()).toBe(cost);
+    }
+
     await page.getByLabel("Customer's name").fill("Petra Fenwick");
     await page.getByLabel("Customer's e-mail").fill(customerEmail);
     // Labour, mounting and freight start without a cost: sending is refused until they have one.

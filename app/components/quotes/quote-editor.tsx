@@ -9,6 +9,7 @@ import { Panel } from "~/components/page-header";
 import { LINE_KIND_LABELS, QUOTE_LINE_KINDS } from "~/domain/quotes/quote-types";
 import { liveTotals, type TypedLine } from "~/lib/quote-live-totals";
 import { quoteEditorSchema, type QuoteEditorForm } from "~/lib/quote-forms";
+import { OfferPicker } from "./offer-picker";
 import { QuoteTotalsTable } from "./quote-totals-table";
 
 const cell = "w-full rounded border border-rule bg-sheet px-2 py-1 text-sm tabular-nums aria-[invalid]:border-fail";
@@ -17,11 +18,14 @@ export function QuoteEditor({
   defaultValue,
   lastResult,
   currency,
+  offerChoices,
   sentRevision,
 }: {
   defaultValue: QuoteEditorForm;
   lastResult?: SubmissionResult<string[]> | null;
   currency: string;
+  /** The team's valid offers for each part line's part, cheapest first, keyed "partKind:partId". */
+  offerChoices: Record<string, { offerId: string; supplierName: string; unitCost: string }[]>;
   /** Set when the revision being edited was already sent: saving starts the next revision. */
   sentRevision: number | null;
 }) {
@@ -104,6 +108,19 @@ export function QuoteEditor({
                     </td>
                     <td className="py-1 pr-2">
                       <input {...getInputProps(f.description, { type: "text" })} aria-label={`Line ${i + 1} description`} className={cell} />
+                      <OfferPicker
+                        index={i}
+                        choices={f.partKind.value && f.partId.value ? (offerChoices[`${f.partKind.value}:${f.partId.value}`] ?? []) : null}
+                        offerId={f.offerId.value}
+                        currency={currency}
+                        onPick={(choice) => {
+                          form.update({ name: f.offerId.name, value: choice.offerId });
+                          form.update({ name: f.unitCost.name, value: choice.unitCost });
+                          const description = f.description.value ?? "";
+                          if (/\(from [^)]*\)$/.test(description))
+                            form.update({ name: f.description.name, value: description.replace(/\(from [^)]*\)$/, `(from ${choice.supplierName})`) });
+                        }}
+                      />
                       {errors.length ? <p className="mt-1 text-xs text-fail">✕ {errors.join(" ")}</p> : null}
                     </td>
                     <td className="py-1 pr-2">

@@ -51,6 +51,12 @@ export async function saveQuoteEdits(teamId: string, actor: QuoteActor, quoteId:
       .where("quote_id", "=", quote.id)
       .where("revision", "=", quote.latest_revision)
       .executeTakeFirstOrThrow();
+    const offerIds = [...new Set(form.lines.flatMap((l) => (l.offerId ? [l.offerId] : [])))];
+    if (offerIds.length) {
+      const own = await trx.selectFrom("offer").select("id").where("team_id", "=", teamId).where("id", "in", offerIds).execute();
+      const foreign = form.lines.findIndex((l) => l.offerId && !own.some((o) => o.id === l.offerId));
+      if (foreign >= 0) return { ok: false, status: 400, message: `Line ${foreign + 1} names an offer that is not one of your team's.` };
+    }
     const content = formToContent(form);
     const common = {
       quoteId: quote.id,

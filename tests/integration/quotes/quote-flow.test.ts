@@ -227,4 +227,42 @@ describe("quotes", () => {
     const ok = await customer.client.action(myQuote, `/my-quotes/${quoteId}`, { intent: "approve", acceptedName: "On Time", confirm: "on" }, { quoteId });
     expect(ok.status).toBe(302);
   });
+
+  it("offers each part line the team's valid offers, cheapest first, and refuses another team's offer", async () => {
+    const team = await teamWithPlan("q-offers", { moduleUnitPrice: "100.00" });
+    const dearer = await db
+      .insertInto("supplier")
+      .values({ team_id: team.teamId, name: "Dearer supplies", currency: "EUR" })
+      .returning("id")
+      .executeTakeFirstOrThrow();
+    await db
+      .insertInto("offer")
+      .values({
+        team_id: team.teamId,
+        supplier_id: dearer.id,
+        part_kind: "modules",
+        part_id: team.setup.moduleId,
+        currency: "EUR",
+        unit_price: "95.00",
+        shipping_per_order: "40.00",
+      })
+      .execute();
+    const { quoteId, page } = await draftQuote(team);
+    const values = page.data.editor as QuoteEditorForm;
+    const module = values.lines.find((l) => l.partKind === "modules")!;
+    const n = Number(module.quantity);
+    const choices = page.data.offerChoices[`modules:${team.setup.moduleId}`] as { supplierName: string; unitCost: string }[];
+    // 100.00 a unit, or 95.00 a unit plus 40.00 an order: cheaper per unit only from 9 modules up.
+    const dearerUnit = ((95 * n + 40) / n).toFixed(4).replace(/\.?0+$/, "");
+    expect(choices.map((c) => c.supplierName)).toEqual(n >= 9 ? ["Dearer supplies", "Supplier q-offers"] : ["Supplier q-offers", "Dearer supplies"]);
+    expect(choices.find((c) => c.supplierName === "Dearer supplies")!.unitCost).toBe(dearerUnit);
+    expect(module.unitCost).toBe(choices[0].unitCost);
+
+    const other = await teamWithPlan("q-offers-other");
+    const foreign = await db.selectFrom("offer").select("id").where("team_id", "=", other.teamId).executeTakeFirstOrThrow();
+    const lines = values.lines.map((l) => (l === module ? { ...l, offerId: foreign.id } : l.unitCost === "0" ? { ...l, unitCost: "10" } : l));
+    const refused = await team.client.action(quotePage, `/quotes/${quoteId}`, editorForm({ ...values, customerEmail: "buyer@example.org", lines }), { quoteId });
+    expect(refused.status).toBe(400);
+    expect(JSON.stringify(refused.data)).toMatch(/not one of your team's/);
+  });
 });
