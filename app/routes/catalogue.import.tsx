@@ -1,10 +1,10 @@
 // A curator imports parts from a CSV file: first a check that lists every row's problems and writes
 // nothing, then an import that writes every row in one transaction, or none.
 import { data, Form, Link, useNavigation } from "react-router";
-import { CsvColumnsList, CsvTemplateLink } from "~/components/csv-columns";
+import { CsvColumnsList, CsvSourceFields, CsvTemplateLink } from "~/components/csv-columns";
 import type { Route } from "./+types/catalogue.import";
 import { ImportReportPanel } from "~/components/catalogue/import-report";
-import { FormErrors, inputClass, SubmitButton } from "~/components/form-field";
+import { FormErrors, SubmitButton } from "~/components/form-field";
 import { PageHeader, Panel } from "~/components/page-header";
 import { isPartKind, PART_KIND_LABELS, PART_KINDS, type PartKind } from "~/domain/catalogue/part-kinds";
 import { MAX_CSV_BYTES, type ImportReport } from "~/lib/catalogue-csv-check";
@@ -87,24 +87,7 @@ export default function CatalogueImport({ loaderData, actionData }: Route.Compon
             <Form method="post" encType="multipart/form-data" className="space-y-4">
               <FormErrors errors={actionData?.error ? [actionData.error] : undefined} />
               <input type="hidden" name="kind" value={kind} />
-              <div>
-                <label htmlFor="csv-file" className="mb-1 block text-sm font-medium">
-                  CSV file of {PART_KIND_LABELS[kind].plural.toLowerCase()}
-                </label>
-                <input
-                  id="csv-file"
-                  type="file"
-                  name="file"
-                  accept=".csv,text/csv"
-                  className="block text-sm text-ink-soft file:mr-3 file:rounded-md file:border file:border-rule file:bg-sheet file:px-3 file:py-1.5 file:text-ink hover:file:bg-paper-deep"
-                />
-              </div>
-              <div>
-                <label htmlFor="csv-text" className="mb-1 block text-sm font-medium">
-                  …or paste its contents
-                </label>
-                <textarea id="csv-text" name="csvText" rows={6} className={`${inputClass} font-mono text-xs`} />
-              </div>
+              <CsvSourceFields fileLabel={`CSV file of ${PART_KIND_LABELS[kind].plural.toLowerCase()}`} />
               <SubmitButton name="intent" value="check" pending={busy}>
                 Check the file (writes nothing)
               </SubmitButton>

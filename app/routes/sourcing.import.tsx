@@ -1,9 +1,9 @@
 // Import a supplier's price list: first a check that lists every row's problems and writes nothing,
 // then an import that writes every row in one transaction, or none.
 import { data, Form, useNavigation } from "react-router";
-import { CsvColumnsList, CsvTemplateLink } from "~/components/csv-columns";
+import { CsvColumnsList, CsvSourceFields, CsvTemplateLink } from "~/components/csv-columns";
 import type { Route } from "./+types/sourcing.import";
-import { FormErrors, inputClass, SubmitButton } from "~/components/form-field";
+import { FormErrors, SubmitButton } from "~/components/form-field";
 import { PageHeader, Panel } from "~/components/page-header";
 import { OfferImportReportPanel } from "~/components/sourcing/offer-import-report";
 import { SourcingTabs } from "~/components/sourcing/sourcing-tabs";
@@ -67,18 +67,7 @@ export default function SourcingImport({ actionData }: Route.ComponentProps) {
           <Panel title="1 · Check the file">
             <Form method="post" encType="multipart/form-data" className="space-y-4">
               <FormErrors errors={actionData?.error ? [actionData.error] : undefined} />
-              <div>
-                <label htmlFor="csv-file" className="mb-1 block text-sm font-medium">
-                  CSV file of offers
-                </label>
-                <input id="csv-file" type="file" name="file" accept=".csv,text/csv" className="block text-sm" />
-              </div>
-              <div>
-                <label htmlFor="csv-text" className="mb-1 block text-sm font-medium">
-                  …or paste its contents
-                </label>
-                <textarea id="csv-text" name="csvText" rows={6} className={`${inputClass} font-mono text-xs`} />
-              </div>
+              <CsvSourceFields fileLabel="CSV file of offers" />
               <SubmitButton name="intent" value="check" pending={busy}>
                 Check the file (writes nothing)
               </SubmitButton>
