@@ -8,6 +8,9 @@ import { FlashBanner } from "./components/flash-banner";
 import { env } from "./server/env.server";
 import { readFlash } from "./server/flash.server";
 import { findMembership, getSessionUser } from "./server/guards.server";
+import { skipAfterPreview } from "~/lib/preview-revalidation";
+
+export const shouldRevalidate = skipAfterPreview;
 
 export const links: Route.LinksFunction = () => [
   { rel: "stylesheet", href: stylesheet },

@@ -17,6 +17,9 @@ import { requireTeamMember } from "~/server/guards.server";
 import { editorOptions } from "~/server/plans/plan-page.server";
 import { choicesFromForm, planFromChoices } from "~/server/plans/plan-service.server";
 import { addRevision, findPlan, saveOverrides } from "~/server/plans/plans.server";
+import { skipAfterPreview } from "~/lib/preview-revalidation";
+
+export const shouldRevalidate = skipAfterPreview;
 
 export const meta: Route.MetaFunction = ({ data }) => [{ title: `${data?.name ?? "Kit plan"} · Kitwright` }];
 

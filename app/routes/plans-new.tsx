@@ -10,6 +10,9 @@ import { defaultChoices, editorOptions } from "~/server/plans/plan-page.server";
 import { choicesFromForm, planFromChoices } from "~/server/plans/plan-service.server";
 import { createPlan } from "~/server/plans/plans.server";
 import { findSite, listSites } from "~/server/sites.server";
+import { skipAfterPreview } from "~/lib/preview-revalidation";
+
+export const shouldRevalidate = skipAfterPreview;
 
 export const meta: Route.MetaFunction = () => [{ title: "New kit plan · Kitwright" }];
 

@@ -22,6 +22,9 @@ import { requireTeamMember } from "~/server/guards.server";
 import { listReadableModules } from "~/server/readings/reading-queries.server";
 import { submitReading } from "~/server/readings/submit-reading.server";
 import { readLimitedFormData, UploadTooLargeError } from "~/server/readings/upload.server";
+import { skipAfterPreview } from "~/lib/preview-revalidation";
+
+export const shouldRevalidate = skipAfterPreview;
 
 export const meta: Route.MetaFunction = () => [{ title: "Submit a field reading · Kitwright" }];
 

@@ -15,6 +15,9 @@ import { toRequestBody, type MonthRow, type YieldFormState } from "~/lib/yield-f
 import { requireStaff } from "~/server/guards.server";
 import { listModules } from "~/server/modules.server";
 import { computeYield } from "~/server/yield.server";
+import { skipAfterPreview } from "~/lib/preview-revalidation";
+
+export const shouldRevalidate = skipAfterPreview;
 
 export const meta: Route.MetaFunction = () => [{ title: "Site yield · Kitwright" }];
 

@@ -14,15 +14,14 @@ type Answer = PlanShown | { error: { message: string; fields?: Record<string, st
 
 export function usePlanPreview(choices: unknown, { skipFirst }: { skipFirst: boolean }) {
   const fetcher = useFetcher<Answer>();
-  const first = useRef(skipFirst);
+  // With a saved plan on screen, the choices it was made from need no preview: only edits do.
+  const shownBody = useRef(skipFirst ? JSON.stringify(choices) : null);
   const [last, setLast] = useState<PlanShown | null>(null);
   const body = JSON.stringify(choices);
 
   useEffect(() => {
-    if (first.current) {
-      first.current = false;
-      return;
-    }
+    if (body === shownBody.current) return;
+    shownBody.current = null;
     const timer = setTimeout(() => fetcher.submit(body, { method: "post", action: "/api/v1/plans/preview", encType: "application/json" }), 300);
     return () => clearTimeout(timer);
     // eslint-disable-next-line react-hooks/exhaustive-deps
