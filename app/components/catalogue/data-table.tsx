@@ -1,6 +1,7 @@
 // A catalogue table (TanStack Table v9) whose rows arrive sorted and paged by the server: the table
 // renders headers and cells, and a click on a sortable header asks the page for a new sort.
 import { rowSortingFeature, tableFeatures, useTable, type ColumnDef, type SortingState } from "@tanstack/react-table";
+import { SortableHeaderCell } from "~/components/sortable-header-cell";
 
 export const catalogueFeatures = tableFeatures({ rowSortingFeature });
 export type CatalogueFeatures = typeof catalogueFeatures;
@@ -51,35 +52,11 @@ export function DataTable<T extends { id: string } & Record<string, any>>({
         <thead className="border-b-2 border-ink/70 text-xs text-ink-soft">
           {table.getHeaderGroups().map((group) => (
             <tr key={group.id}>
-              {group.headers.map((header) => {
-                const numeric = numericColumns.has(header.column.id);
-                const sorted = header.column.getIsSorted();
-                const canSort = header.column.getCanSort();
-                return (
-                  <th
-                    key={header.id}
-                    scope="col"
-                    aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined}
-                    className={`px-2 py-2 align-bottom font-medium ${numeric ? "text-right" : ""}`}
-                  >
-                    {header.isPlaceholder ? null : canSort ? (
-                      <button
-                        type="button"
-                        onClick={header.column.getToggleSortingHandler()}
-                        className={`inline-flex items-end gap-1 text-left font-medium hover:text-ink ${numeric ? "text-right" : ""} ${sorted ? "text-ink" : ""}`}
-                      >
-                        <table.FlexRender header={header} />
-                        <span aria-hidden="true" className={`w-3 ${sorted ? "text-copper" : "text-ink-faint"}`}>
-                          {sorted === "asc" ? "↑" : sorted === "desc" ? "↓" : "↕"}
-                        </span>
-                        <span className="sr-only">{sorted ? `sorted ${sorted === "asc" ? "ascending" : "descending"}` : "sort"}</span>
-                      </button>
-                    ) : (
-                      <table.FlexRender header={header} />
-                    )}
-                  </th>
-                );
-              })}
+              {group.headers.map((header) => (
+                <SortableHeaderCell key={header.id} column={header.column} numeric={numericColumns.has(header.column.id)} placeholder={header.isPlaceholder}>
+                  <table.FlexRender header={header} />
+                </SortableHeaderCell>
+              ))}
             </tr>
           ))}
         </thead>

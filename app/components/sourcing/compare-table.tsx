@@ -13,6 +13,7 @@ import {
 } from "@tanstack/react-table";
 import { compareAmounts } from "~/domain/sourcing/ranking";
 import type { MoneyText } from "~/domain/sourcing/comparison-rows";
+import { SortableHeaderCell } from "~/components/sortable-header-cell";
 
 export const compareFeatures = tableFeatures({
   rowSortingFeature,
@@ -69,34 +70,11 @@ export function CompareTable<T extends { offerId: string } & Record<string, any>
         <thead className="border-b-2 border-ink/70 text-xs uppercase tracking-wide text-ink-soft">
           {table.getHeaderGroups().map((group) => (
             <tr key={group.id}>
-              {group.headers.map((header) => {
-                const numeric = numericColumns.has(header.column.id);
-                const sorted = header.column.getIsSorted();
-                return (
-                  <th
-                    key={header.id}
-                    scope="col"
-                    aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined}
-                    className={`px-2 py-2 align-bottom font-medium ${numeric ? "text-right" : ""}`}
-                  >
-                    {header.column.getCanSort() ? (
-                      <button
-                        type="button"
-                        onClick={header.column.getToggleSortingHandler()}
-                        className={`inline-flex items-center gap-1 uppercase hover:text-ink ${sorted ? "text-ink" : ""}`}
-                      >
-                        <table.FlexRender header={header} />
-                        <span aria-hidden="true" className="w-3 text-copper">
-                          {sorted === "asc" ? "↑" : sorted === "desc" ? "↓" : "↕"}
-                        </span>
-                        <span className="sr-only">{sorted ? `sorted ${sorted === "asc" ? "ascending" : "descending"}` : "sort"}</span>
-                      </button>
-                    ) : (
-                      <table.FlexRender header={header} />
-                    )}
-                  </th>
-                );
-              })}
+              {group.headers.map((header) => (
+                <SortableHeaderCell key={header.id} column={header.column} numeric={numericColumns.has(header.column.id)}>
+                  <table.FlexRender header={header} />
+                </SortableHeaderCell>
+              ))}
             </tr>
           ))}
         </thead>
