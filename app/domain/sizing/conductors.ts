@@ -8,7 +8,6 @@ import {
   METRIC_CONDUCTOR_TEMPERATURE_C,
   METRIC_COPPER,
   METRIC_COPPER_TABLE_SOURCE,
-  METRIC_STRANDING_ALLOWANCE,
 } from "../../../data/conductors/metric-copper";
 
 export type ConductorSystem = "awg" | "mm2";
@@ -26,10 +25,15 @@ export interface Conductor {
   maxOvercurrentA: number;
 }
 
-/** R′ of copper of a given area at a temperature from ρ20 and α (REFERENCES), Ω/km, without stranding allowance. */
+/** R′ of copper of a given area at a temperature from ρ20 and α (REFERENCES), Ω/km: the nominal solid area. */
 export function copperResistanceOhmPerKm(areaMm2: number, temperatureC: number): number {
   const resistivityOhmM = COPPER_RESISTIVITY_20C_OHM_M * (1 + COPPER_TEMPERATURE_COEFFICIENT_PER_K * (temperatureC - 20));
   return (resistivityOhmM / (areaMm2 * 1e-6)) * 1000;
+}
+
+/** A resistance given at 20 °C, at another conductor temperature: R_T = R20·(1 + α·(T − 20 °C)) (REFERENCES). */
+export function copperResistanceAt(ohmPerKm20C: number, temperatureC: number): number {
+  return ohmPerKm20C * (1 + COPPER_TEMPERATURE_COEFFICIENT_PER_K * (temperatureC - 20));
 }
 
 export function conductorTable(system: ConductorSystem): Conductor[] {
@@ -45,7 +49,7 @@ export function conductorTable(system: ConductorSystem): Conductor[] {
   return METRIC_COPPER.map((row) => ({
     label: `${row.areaMm2} mm²`,
     areaMm2: row.areaMm2,
-    ohmPerKm: copperResistanceOhmPerKm(row.areaMm2, METRIC_CONDUCTOR_TEMPERATURE_C) * (1 + METRIC_STRANDING_ALLOWANCE),
+    ohmPerKm: copperResistanceAt(row.maxOhmPerKm20C, METRIC_CONDUCTOR_TEMPERATURE_C),
     ampacityA: row.ampacityA,
     maxOvercurrentA: row.ampacityA,
   }));

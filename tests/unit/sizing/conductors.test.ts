@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { AWG_COPPER } from "../../../data/conductors/awg-copper";
+import { METRIC_COPPER } from "../../../data/conductors/metric-copper";
 import { chooseConductor, conductorTable, copperResistanceOhmPerKm, FEET_PER_KM, maxOhmPerKmForDrop, voltageDropV } from "~/domain/sizing/conductors";
 
 describe("conductor resistance", () => {
@@ -35,12 +36,25 @@ describe("conductor resistance", () => {
     }
   });
 
-  it("computes mm² copper from resistivity at 75 °C — hand calculation", () => {
-    // 1.7241e-8 × (1 + 0.00393 × 55) ÷ 2.5e-6 m² = 8.3872e-3 Ω/m = 8.3872 Ω/km; table adds 5 % for stranding.
-    expect(copperResistanceOhmPerKm(2.5, 75)).toBeCloseTo(8.3872, 3);
-    expect(conductorTable("mm2").find((c) => c.areaMm2 === 2.5)?.ohmPerKm).toBeCloseTo(8.3872 * 1.05, 3);
-    // At 20 °C the textbook value for 1 mm²: 17.241 Ω/km.
+  it("holds IEC 60228 class 5 plain copper at 20 °C and corrects it to 75 °C — hand calculation", () => {
+    // IEC 60228 Table 3, class 5, plain copper, Ω/km at 20 °C (mycableengineering.com and nationalcables.com
+    // reproductions of the table agree on these rows).
+    const expected: Record<number, number> = { 1.5: 13.3, 2.5: 7.98, 4: 4.95, 6: 3.3, 10: 1.91, 16: 1.21, 25: 0.78 };
+    for (const [area, ohm] of Object.entries(expected)) {
+      expect(METRIC_COPPER.find((row) => row.areaMm2 === Number(area))?.maxOhmPerKm20C, `${area} mm²`).toBe(ohm);
+    }
+    // 6 mm²: 3.30 × (1 + 0.00393 × (75 − 20)) = 3.30 × 1.21615 = 4.0133 Ω/km.
+    expect(conductorTable("mm2").find((c) => c.areaMm2 === 6)?.ohmPerKm).toBeCloseTo(4.0133, 3);
+    // At 20 °C the textbook value for 1 mm² of solid annealed copper: 17.241 Ω/km.
     expect(copperResistanceOhmPerKm(1, 20)).toBeCloseTo(17.241, 6);
+  });
+
+  it("puts every class 5 limit 0–20 % above the nominal area's resistance (fine strands, lay and tolerance)", () => {
+    for (const row of METRIC_COPPER) {
+      const ratio = row.maxOhmPerKm20C / copperResistanceOhmPerKm(row.areaMm2, 20);
+      expect(ratio, `${row.areaMm2} mm²`).toBeGreaterThan(1);
+      expect(ratio, `${row.areaMm2} mm²`).toBeLessThan(1.2);
+    }
   });
 });
 
