@@ -4,14 +4,10 @@
 import { z } from "zod";
 import { siteSchema } from "~/domain/solar/yield-request";
 import { nameField } from "./name-field";
+import { SKY_PRESETS as CLEARNESS_PRESETS, type SkyPreset as ClearnessPreset } from "~/domain/solar/sky-assumption";
 
-/** Clearness-index presets for sites without weather data (common practice, no source: round values). */
-export const CLEARNESS_PRESETS = {
-  arid: { label: "Arid, mostly clear skies", clearnessIndex: 0.65 },
-  temperate: { label: "Temperate, mixed skies", clearnessIndex: 0.5 },
-  overcast: { label: "Often overcast", clearnessIndex: 0.35 },
-} as const;
-export type ClearnessPreset = keyof typeof CLEARNESS_PRESETS;
+// The presets live with the wording that shows them as an assumption (one place for both).
+export { SKY_PRESETS as CLEARNESS_PRESETS, type SkyPreset as ClearnessPreset } from "~/domain/solar/sky-assumption";
 
 const num = (label: string) => z.number({ error: (i) => (i.input === undefined ? `Enter the ${label}.` : `The ${label} must be a number.`) });
 
@@ -104,4 +100,25 @@ export function toEngineSite(
       ...(m.albedo !== undefined ? { albedo: m.albedo } : {}),
     })),
   };
+}
+
+/** The compass direction of the equator from the site: south (180°) north of it, north (0°) south of it. */
+export function equatorAzimuthDeg(latitudeDeg: number) {
+  return latitudeDeg < 0 ? 0 : 180;
+}
+
+/**
+ * A warning (not an error: a pole-facing roof can be a real choice) when the array faces more than
+ * 90° away from the equator, where it harvests much less; null otherwise or while a figure is missing.
+ */
+export function poleFacingWarning(latitudeDeg: unknown, azimuthDeg: unknown): string | null {
+  const lat = typeof latitudeDeg === "string" && latitudeDeg.trim() === "" ? NaN : Number(latitudeDeg);
+  const az = typeof azimuthDeg === "string" && azimuthDeg.trim() === "" ? NaN : Number(azimuthDeg);
+  if (!Number.isFinite(lat) || !Number.isFinite(az) || latitudeDeg == null || azimuthDeg == null) return null;
+  // On the equator no direction is "away" from it.
+  if (lat === 0) return null;
+  const equator = equatorAzimuthDeg(lat);
+  const apart = Math.abs(((((az - equator) % 360) + 540) % 360) - 180);
+  if (apart <= 90) return null;
+  return `This array faces the pole: it will harvest much less than one facing ${equator === 180 ? "south (180°)" : "north (0°)"}, the equator's side at this latitude. Check the compass direction (0° north, 90° east, 180° south).`;
 }

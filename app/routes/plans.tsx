@@ -3,12 +3,19 @@ import type { Route } from "./+types/plans";
 import { PageHeader, Panel } from "~/components/page-header";
 import { requireTeamMember } from "~/server/guards.server";
 import { listPlans } from "~/server/plans/plans.server";
+import { skyAssumptionOfMonths, skyAssumptionSentence } from "~/domain/solar/sky-assumption";
 
 export const meta: Route.MetaFunction = () => [{ title: "Kit plans · Kitwright" }];
 
 export async function loader({ request }: Route.LoaderArgs) {
   const { team } = await requireTeamMember(request);
-  return { plans: await listPlans(team.teamId) };
+  const plans = await listPlans(team.teamId);
+  return {
+    plans: plans.map(({ assumedSkyMonths, ...p }) => {
+      const sky = skyAssumptionOfMonths(assumedSkyMonths);
+      return { ...p, sky: sky ? skyAssumptionSentence(sky) : null };
+    }),
+  };
 }
 
 export default function Plans({ loaderData }: Route.ComponentProps) {
@@ -38,6 +45,12 @@ export default function Plans({ loaderData }: Route.ComponentProps) {
                   <span className="text-sm text-ink-soft">
                     at {p.siteName} · revision {p.latest_revision}
                   </span>
+                  {p.sky ? (
+                    <span className="block text-sm text-warn" data-testid="plan-sky-assumption">
+                      <span aria-hidden="true">⚠ </span>
+                      {p.sky}
+                    </span>
+                  ) : null}
                 </span>
                 <span className={`text-sm ${open ? "text-fail" : "text-pass"}`}>
                   {open

@@ -32,6 +32,7 @@ export default function SitesNew({ actionData }: Route.ComponentProps) {
       <SiteFormView
         lastResult={actionData?.result}
         submitLabel="Save site"
+        azimuthFollowsLatitude
         defaultValue={{ irradianceSource: "measured", albedo: 0.2, shadingDeratePct: 0, elevationM: 0, azimuthDeg: 180, months: BLANK_MONTHS }}
       />
     </>

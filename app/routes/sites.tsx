@@ -1,7 +1,7 @@
 import { Link } from "react-router";
 import type { Route } from "./+types/sites";
 import { PageHeader, Panel } from "~/components/page-header";
-import { CLEARNESS_PRESETS, type ClearnessPreset } from "~/lib/site-forms";
+import { skyAssumptionOfPreset, skyAssumptionShort } from "~/domain/solar/sky-assumption";
 import { requireTeamMember } from "~/server/guards.server";
 import { listSites } from "~/server/sites.server";
 
@@ -10,6 +10,10 @@ export const meta: Route.MetaFunction = () => [{ title: "Sites · Kitwright" }];
 export async function loader({ request }: Route.LoaderArgs) {
   const { team } = await requireTeamMember(request);
   return { sites: await listSites(team.teamId), teamName: team.teamName };
+}
+
+function skyOf(s: { irradiance_source: string; clearness_preset: string | null }) {
+  return s.irradiance_source === "clearness-preset" ? skyAssumptionOfPreset(s.clearness_preset) : null;
 }
 
 export default function Sites({ loaderData }: Route.ComponentProps) {
@@ -37,9 +41,7 @@ export default function Sites({ loaderData }: Route.ComponentProps) {
               </span>
               <span className="figures text-sm text-ink-faint">
                 {s.latitude_deg.toFixed(2)}°, {s.longitude_deg.toFixed(2)}° · tilt {s.tilt_deg}° facing {s.azimuth_deg}° ·{" "}
-                {s.irradiance_source === "measured"
-                  ? "measured irradiation"
-                  : `assumed sky: ${CLEARNESS_PRESETS[s.clearness_preset as ClearnessPreset]?.label ?? s.clearness_preset}`}
+                {skyOf(s) ? <span className="text-warn">⚠ {skyAssumptionShort(skyOf(s)!)}</span> : "measured irradiation"}
               </span>
             </li>
           ))}

@@ -58,12 +58,6 @@ export async function updateSite(teamId: string, siteId: string, form: SiteForm)
   return Number(result.numUpdatedRows) > 0;
 }
 
-export async function deleteSite(teamId: string, siteId: string) {
-  if (!isUuid(siteId)) return false;
-  const result = await db.deleteFrom("site").where("team_id", "=", teamId).where("id", "=", siteId).executeTakeFirst();
-  return Number(result.numDeletedRows) > 0;
-}
-
 /** A stored site back in the form's shape (for editing and for the API). */
 export function siteToForm(site: NonNullable<Awaited<ReturnType<typeof findSite>>>): SiteForm {
   return {

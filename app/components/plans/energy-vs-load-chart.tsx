@@ -4,6 +4,7 @@
 import { Bar, CartesianGrid, ComposedChart, Legend, Line, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import type { KitPlan } from "~/domain/sizing/plan-types";
 import { MONTH_NAMES, MONTH_SHORT, formatNumber } from "~/lib/plan-format";
+import { skyAssumptionOfMonths, skyAssumptionSentence } from "~/domain/solar/sky-assumption";
 
 const INK_SOFT = "#4a5062";
 
@@ -26,6 +27,7 @@ export function EnergyVsLoadChart({ plan }: { plan: KitPlan }) {
     design && designName
       ? `Design month ${designName}: the ${array.layout.moduleCount}-module array gives ${formatNumber(design.arrayWhPerDay)} Wh/day against ${formatNumber(design.loadWhPerDay)} Wh/day of load and ${formatNumber(design.requiredArrayWhPerDay)} Wh/day required with the margin.`
       : "There is no load, so no month sets the array's size.";
+  const sky = skyAssumptionOfMonths(plan.moduleYield?.months);
   return (
     <figure>
       <div
@@ -70,6 +72,12 @@ export function EnergyVsLoadChart({ plan }: { plan: KitPlan }) {
       <figcaption className="mt-2 text-sm text-ink-soft" data-testid="energy-chart-caption">
         {summary} Array energy: to the battery on the month's average day, after losses and shade. Required: the load ÷ the battery's round-trip efficiency,
         plus the design margin.
+        {sky ? (
+          <span className="mt-1 block font-medium text-warn" data-testid="energy-chart-sky">
+            <span aria-hidden="true">⚠ </span>
+            {skyAssumptionSentence(sky)}
+          </span>
+        ) : null}
       </figcaption>
     </figure>
   );

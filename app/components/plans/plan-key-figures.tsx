@@ -5,6 +5,8 @@ import { CHEMISTRY_LABELS } from "~/domain/sizing/parts";
 import type { KitPlan } from "~/domain/sizing/plan-types";
 import { MONTH_NAMES, formatNumber, layoutWords, plural } from "~/lib/plan-format";
 import { powerBasisWords, type PlanPartFacts } from "./plan-parts";
+import { SkyAssumptionNote } from "~/components/sky-assumption-note";
+import { skyAssumptionOfMonths } from "~/domain/solar/sky-assumption";
 
 export function PlanKeyFigures({ plan, parts }: { plan: KitPlan; parts?: PlanPartFacts }) {
   const { array, battery, inverter, simulation, load } = plan;
@@ -14,8 +16,18 @@ export function PlanKeyFigures({ plan, parts }: { plan: KitPlan; parts?: PlanPar
   const ratedPerModuleW = layout.moduleCount > 0 ? layout.arrayStcPowerW / layout.moduleCount : 0;
   const arrayOrigin = Math.abs(ratedPerModuleW - array.modulePmaxUsedW) < 1e-6 ? basis : "nameplate";
   const design = array.designMonth === null ? null : array.months[array.designMonth - 1];
+  // Every energy figure here rests on the site's sunshine: an assumed sky is said before them.
+  const sky = skyAssumptionOfMonths(plan.moduleYield?.months);
   return (
     <dl className="grid grid-cols-1 gap-3 sm:grid-cols-2 lg:grid-cols-3" data-testid="plan-key-figures">
+      {sky ? (
+        <div className="sm:col-span-2 lg:col-span-3">
+          <dt className="sr-only">Sunshine</dt>
+          <dd>
+            <SkyAssumptionNote assumption={sky} />
+          </dd>
+        </div>
+      ) : null}
       <Card label="Modules" value={formatNumber(layout.moduleCount)} unit={plural(layout.moduleCount, "module")} testId="key-modules">
         <Detail>
           {layoutWords(layout.modulesInSeries, layout.stringsInParallel)}

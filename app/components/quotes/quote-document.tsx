@@ -3,6 +3,7 @@
 // cautions, the terms and how long it holds. Laid out to print cleanly on A4 from the browser.
 import { BrandMark } from "~/components/brand-mark";
 import { PlanCautions } from "~/components/plans/plan-cautions";
+import { SkyAssumptionNote } from "~/components/sky-assumption-note";
 import { formatNumber } from "~/lib/plan-format";
 import type { QuoteDocumentData } from "~/lib/quote-document";
 import { QuoteChecksList } from "./quote-checks-list";
@@ -62,6 +63,7 @@ export function QuoteDocument({ doc }: { doc: QuoteDocumentData }) {
       </section>
       <section>
         <h2 className="mb-2 text-lg font-semibold break-after-avoid">Energy you can expect</h2>
+        <SkyAssumptionNote assumption={plan.skyAssumption} className="mb-2 break-inside-avoid" />
         <QuoteEnergyChart months={plan.months} />
       </section>
       <section>

@@ -1,38 +1,10 @@
 // Fills the twelve irradiation cells from pasted numbers or a CSV file (month, irradiation, max, min,
-// albedo — a header row is optional), so installers can bring their own weather data.
-import Papa from "papaparse";
+// albedo — a header row and the month column are optional), so installers can bring their own weather
+// data. The parsing is in app/lib/monthly-data.ts.
 import { useState } from "react";
+import { parseMonthlyCsv, parseTwelveNumbers, type PastedMonth } from "~/lib/monthly-data";
 
-export interface PastedMonth {
-  ghiKWhM2Day?: string;
-  tMaxC?: string;
-  tMinC?: string;
-  albedo?: string;
-}
-
-/** Twelve numbers separated by spaces, commas, semicolons or new lines. */
-export function parseTwelveNumbers(text: string): number[] | string {
-  const parts = text
-    .trim()
-    .split(/[\s,;]+/)
-    .filter(Boolean);
-  if (parts.length !== 12) return `Found ${parts.length} values; paste exactly 12, January to December.`;
-  const values = parts.map((p) => Number(p));
-  const bad = values.findIndex((v) => !Number.isFinite(v));
-  return bad >= 0 ? `Value ${bad + 1} ("${parts[bad]}") is not a number.` : values;
-}
-
-export function parseMonthlyCsv(text: string): PastedMonth[] | string {
-  const { data } = Papa.parse<string[]>(text.trim(), { skipEmptyLines: true });
-  const rows = data.filter((row) => row.some((c) => /\d/.test(c)) && !/[a-df-z]/i.test(row.slice(1).join("")));
-  if (rows.length !== 12) return `Found ${rows.length} data rows; the file needs 12 (one per month).`;
-  return rows.map((row) => {
-    // A first column holding the month (1–12 or a name) is skipped.
-    const cells = /^\s*(\d{1,2}|[a-z]{3,})\s*$/i.test(row[0] ?? "") && row.length >= 4 ? row.slice(1) : row;
-    const [ghiKWhM2Day, tMaxC, tMinC, albedo] = cells.map((c) => c.trim());
-    return { ghiKWhM2Day, tMaxC, tMinC, albedo: albedo || undefined };
-  });
-}
+export type { PastedMonth };
 
 export function MonthlyPaste({ onValues }: { onValues: (months: PastedMonth[]) => void }) {
   const [text, setText] = useState("");
@@ -63,7 +35,8 @@ export function MonthlyPaste({ onValues }: { onValues: (months: PastedMonth[]) =
         Fill irradiation
       </button>
       <label htmlFor="upload-climate" className="mt-3 block">
-        Or a CSV file with 12 rows: month, irradiation (kWh/m²/day), mean max °C, mean min °C, albedo (optional)
+        Or a CSV file with 12 rows: month, irradiation (kWh/m²/day), mean max °C, mean min °C, albedo (optional). With a month column (1–12 or names) the rows
+        may come in any order; without one, January comes first.
       </label>
       <input
         id="upload-climate"

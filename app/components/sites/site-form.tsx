@@ -1,10 +1,11 @@
 // The whole site editor: customer, place, array, climate. One Conform form, the shared zod schema.
 import { getFormProps, getInputProps, getSelectProps, useForm, type SubmissionResult } from "@conform-to/react";
 import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
+import { useEffect, useState } from "react";
 import { Form, useNavigation } from "react-router";
 import { FieldError, FormErrors, SubmitButton, TextField } from "~/components/form-field";
 import { Panel } from "~/components/page-header";
-import { CLEARNESS_PRESETS, siteFormSchema, type SiteForm } from "~/lib/site-forms";
+import { CLEARNESS_PRESETS, equatorAzimuthDeg, poleFacingWarning, siteFormSchema, type SiteForm } from "~/lib/site-forms";
 import { MonthlyPaste } from "./monthly-paste";
 import { SiteClimateTable } from "./site-climate-table";
 
@@ -20,10 +21,13 @@ export function SiteFormView({
   defaultValue,
   lastResult,
   submitLabel,
+  azimuthFollowsLatitude = false,
 }: {
   defaultValue: Partial<SiteForm> & { months: SiteForm["months"] };
   lastResult?: SubmissionResult<string[]> | null;
   submitLabel: string;
+  /** A new site: until the installer types a direction, the array faces the equator of the latitude typed. */
+  azimuthFollowsLatitude?: boolean;
 }) {
   const navigation = useNavigation();
   const [form, fields] = useForm({
@@ -35,6 +39,15 @@ export function SiteFormView({
     shouldRevalidate: "onInput",
   });
   const measured = fields.irradianceSource.value !== "clearness-preset";
+  const [azimuthTouched, setAzimuthTouched] = useState(!azimuthFollowsLatitude);
+  const latitudeText = fields.latitudeDeg.value;
+  useEffect(() => {
+    const lat = Number(latitudeText);
+    if (azimuthTouched || typeof latitudeText !== "string" || latitudeText.trim() === "" || !Number.isFinite(lat)) return;
+    const equator = String(equatorAzimuthDeg(lat));
+    if (fields.azimuthDeg.value !== equator) form.update({ name: fields.azimuthDeg.name, value: equator });
+  }, [latitudeText, azimuthTouched]);
+  const azimuthWarning = poleFacingWarning(latitudeText, fields.azimuthDeg.value);
   return (
     <Form method="post" {...getFormProps(form)} className="space-y-6">
       <FormErrors errors={form.errors} />
@@ -56,7 +69,16 @@ export function SiteFormView({
             <TextField field={fields.elevationM} label="Elevation (m)" />
             <TextField field={fields.timeZone} label="Time zone" hint="e.g. Europe/Vienna" />
             <TextField field={fields.tiltDeg} label="Array tilt (° from flat)" />
-            <TextField field={fields.azimuthDeg} label="Array faces (° compass)" />
+            {/* Only the installer's own typing (a trusted event) stops the direction following the latitude. */}
+            <div onInputCapture={(e) => e.nativeEvent.isTrusted && setAzimuthTouched(true)}>
+              <TextField field={fields.azimuthDeg} label="Array faces (° compass)" />
+              {azimuthWarning ? (
+                <p className="mt-1 flex gap-1 text-sm text-warn" role="status" data-testid="azimuth-warning">
+                  <span aria-hidden="true">⚠</span>
+                  {azimuthWarning}
+                </p>
+              ) : null}
+            </div>
             <TextField field={fields.albedo} label="Ground albedo (0–1)" />
             <TextField field={fields.shadingDeratePct} label="Shading derate (%)" />
             <TextField field={fields.coldestTempC} label="Coldest expected air (°C)" hint="Sets the cold-morning string voltage." />

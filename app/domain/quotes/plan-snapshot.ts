@@ -1,6 +1,7 @@
 // What a quote tells the customer about the kit, copied from the plan revision it was priced from.
 import { blockingFailures, type CheckOverride } from "../sizing/checks";
 import type { KitPlan } from "../sizing/plan-types";
+import { skyAssumptionOfMonths } from "../solar/sky-assumption";
 import type { QuotePlanSnapshot } from "./quote-types";
 
 export interface SnapshotMeta {
@@ -33,6 +34,8 @@ export function snapshotFromPlan(plan: KitPlan, meta: SnapshotMeta): QuotePlanSn
       return { id: c.id, kind: c.kind, status: c.status, title: c.title, sentence: c.sentence, override: o ? { reason: o.reason, byName: o.byName } : null };
     }),
     cautions: [...plan.cautions],
+    // The customer reads the expected energy; a sky preset behind it goes with it.
+    skyAssumption: skyAssumptionOfMonths(plan.moduleYield?.months),
   };
 }
 

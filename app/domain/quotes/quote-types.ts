@@ -1,5 +1,6 @@
 // The shapes a quote is made of, shared by the editor, the customer's view and the print view.
 import type { CheckKind, CheckStatus } from "../sizing/checks";
+import type { SkyAssumption } from "../solar/sky-assumption";
 
 export const QUOTE_LINE_KINDS = ["part", "labour", "mounting", "freight", "extra"] as const;
 export type QuoteLineKind = (typeof QUOTE_LINE_KINDS)[number];
@@ -43,4 +44,6 @@ export interface QuotePlanSnapshot {
   months: SnapshotMonth[];
   checks: SnapshotCheck[];
   cautions: string[];
+  /** The sky preset the energy rests on (null: measured irradiation); absent in snapshots saved before it was kept. */
+  skyAssumption?: SkyAssumption | null;
 }

@@ -1,5 +1,6 @@
 // Kit plans and their revisions. Every query carries the acting team's id; saving a plan or a revision
 // is one transaction, so a plan never exists without its snapshot.
+import { sql } from "kysely";
 import { db } from "../db.server";
 import { isUuid } from "../modules.server";
 import { planKit } from "~/domain/sizing/kit-plan";
@@ -96,6 +97,12 @@ export function listPlans(teamId: string) {
       "site.name as siteName",
       "r.failing_safety_checks",
       "r.overrides",
+      // Only the months whose sunshine was assumed (a sky preset), not the whole saved result.
+      sql<{ month: number; irradianceSource: "clearness-index"; clearnessIndex: number }[]>`(
+        select coalesce(jsonb_agg(m order by (m->>'month')::int), '[]'::jsonb)
+        from jsonb_array_elements(r.result->'moduleYield'->'months') as m
+        where m->>'irradianceSource' = 'clearness-index'
+      )`.as("assumedSkyMonths"),
     ])
     .where("kit_plan.team_id", "=", teamId)
     .orderBy("kit_plan.updated_at", "desc")
