@@ -29,6 +29,7 @@ export const designSchema = z.object({
   stringsInParallel: num("strings in parallel", 1, 100).int("Strings in parallel is a whole number.").optional(),
   batteryStrings: num("battery strings", 1, 20).int("Battery strings is a whole number.").optional(),
   acceptableUnmetDaysPerYear: num("acceptable unmet days", 0, 365).optional(),
+  maxArrayAreaM2: num("largest array area", 0.1, 100000, " m²").optional(),
   simulationSeed: num("simulation seed", 0, 2 ** 31 - 1)
     .int()
     .optional(),

@@ -31,10 +31,18 @@ export const NUMBER_FIELDS = {
   stringsInParallel: { label: "Strings in parallel (blank: planner's choice)", unit: "" },
   batteryStrings: { label: "Battery strings in parallel (blank: planner's choice)", unit: "" },
   acceptableUnmetDaysPerYear: { label: "Unmet-load days a year the customer accepts", unit: "days" },
+  maxArrayAreaM2: { label: "Largest array area the site allows (blank: no limit)", unit: "m²" },
 } as const;
 export type NumberField = keyof typeof NUMBER_FIELDS;
 
-const OPTIONAL: NumberField[] = ["maxDepthOfDischargePct", "modulesInSeries", "stringsInParallel", "batteryStrings", "acceptableUnmetDaysPerYear"];
+const OPTIONAL: NumberField[] = [
+  "maxDepthOfDischargePct",
+  "modulesInSeries",
+  "stringsInParallel",
+  "batteryStrings",
+  "acceptableUnmetDaysPerYear",
+  "maxArrayAreaM2",
+];
 
 function text(value: number | undefined) {
   return value === undefined ? "" : String(value);
@@ -68,6 +76,7 @@ export function editorStateFrom(choices: Partial<PlanChoices> & { design?: PlanC
       stringsInParallel: text(d.stringsInParallel),
       batteryStrings: text(d.batteryStrings),
       acceptableUnmetDaysPerYear: text(d.acceptableUnmetDaysPerYear),
+      maxArrayAreaM2: text(d.maxArrayAreaM2),
     },
   };
 }
@@ -106,6 +115,7 @@ export function choicesFromState(s: PlanEditorState) {
       stringsInParallel: n("stringsInParallel"),
       batteryStrings: n("batteryStrings"),
       acceptableUnmetDaysPerYear: n("acceptableUnmetDaysPerYear"),
+      maxArrayAreaM2: n("maxArrayAreaM2"),
     },
   };
 }

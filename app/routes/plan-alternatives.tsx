@@ -1,5 +1,6 @@
 // /plans/:planId/alternatives — the cheapest kits from the team's valid offers that meet every check
-// of the plan; "Use this kit" re-plans the plan with it as a new revision.
+// of the plan and its unmet-days target, beside the current kit's own landed total (so a listed kit may
+// save or cost more); "Use this kit" re-plans the plan with it as a new revision.
 import { parseWithZod } from "@conform-to/zod/v4";
 import { data, Link, useNavigation } from "react-router";
 import type { Route } from "./+types/plan-alternatives";
@@ -43,16 +44,31 @@ export async function action({ request, params }: Route.ActionArgs) {
   return redirectWithFlash(`/plans/${params.planId}`, { kind: "success", message: `Kit applied: saved as revision ${outcome.revision}.` });
 }
 
+function unmetDays(n: number) {
+  return `${n} unmet-load ${n === 1 ? "day" : "days"} a year`;
+}
+
+function CurrentKit({ view }: { view: NonNullable<ReturnType<typeof alternativesJson>> }) {
+  const k = view.currentKit;
+  return (
+    <p className="mb-3 text-sm" data-testid="current-kit">
+      {k.landedCost === null ? "⚠ " : ""}
+      {k.sentence}
+    </p>
+  );
+}
+
 export default function PlanAlternatives({ loaderData: l, actionData }: Route.ComponentProps) {
   const pending = useNavigation().state !== "idle";
   const v = l.view;
   return (
     <>
       <PageHeader
-        title={`Cheaper kits for ${l.planName}`}
+        title={`Kits that meet ${l.planName}, cheapest first`}
         lead={
           <>
-            From your team's valid offers, the kits that meet every check of this plan (revision {l.revision}), cheapest landed cost first.{" "}
+            From your team's valid offers, the kits that meet every check of this plan (revision {l.revision})
+            {v ? ` and stay within the ${unmetDays(v.acceptedUnmetDays)} it accepts` : ""}, cheapest landed cost first.{" "}
             <Link to={`/plans/${l.planId}`} className="underline">
               Back to the plan
             </Link>
@@ -81,7 +97,8 @@ export default function PlanAlternatives({ loaderData: l, actionData }: Route.Co
               ))}
               <li>
                 <span className="figures">{v.fullChecks}</span> cheapest candidates re-planned in full; <span className="figures">{v.fullCheckFailures}</span>{" "}
-                failed a check there and are not listed.
+                failed a check or went over the accepted unmet-load days there and are not listed (<span className="figures">{v.overUnmetDays}</span> of them
+                over the days).
               </li>
               {v.ratesUsed.length ? (
                 <li>
@@ -91,14 +108,20 @@ export default function PlanAlternatives({ loaderData: l, actionData }: Route.Co
                 <li>All offers are in {v.currency}: no conversion.</li>
               )}
               {v.exhausted ? <li className="text-warn">⚠ The kept candidates ran out before ten kits passed: the list may miss dearer kits.</li> : null}
+              {v.targetNote ? (
+                <li className="text-warn" data-testid="target-note">
+                  ⚠ {v.targetNote}
+                </li>
+              ) : null}
             </ul>
             <p className="mt-3 text-xs text-ink-faint">
-              The ranking is exact over the candidates considered: for each string length the fewest modules the worst month needs, and the autonomy-sized
-              battery bank with up to two more strings. {v.lifetimeNote}
+              The ranking is exact over the candidates considered: for each string length the fewest modules the worst month needs and up to two more strings in
+              parallel, and the autonomy-sized battery bank with up to two more strings. {v.lifetimeNote}
             </p>
           </Panel>
           {v.alternatives.length ? (
             <Panel title={`The ${v.alternatives.length} cheapest kits`}>
+              <CurrentKit view={v} />
               <AlternativesTable view={v} pending={pending} />
               <p className="mt-3 text-xs text-ink-faint">
                 ⚠ Before buying: a licensed installer confirms the design against local electrical codes — DC arcs, battery fire and cold-morning overvoltage
@@ -107,8 +130,9 @@ export default function PlanAlternatives({ loaderData: l, actionData }: Route.Co
             </Panel>
           ) : (
             <Panel>
+              <CurrentKit view={v} />
               <p className="text-sm">
-                No kit from your valid offers meets every check of this plan. Add offers for more parts on the{" "}
+                {v.targetNote ?? "No kit from your valid offers meets every check of this plan."} Add offers for more parts on the{" "}
                 <Link to="/sourcing" className="underline">
                   sourcing page
                 </Link>

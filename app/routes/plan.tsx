@@ -122,7 +122,7 @@ export default function PlanPage({ loaderData, actionData }: Route.ComponentProp
                 </button>
               </Form>
               <Link to={`/plans/${l.planId}/alternatives`} className="text-sm font-medium text-copper underline">
-                Cheaper kits from your offers →
+                Kits from your offers that meet this plan →
               </Link>
               <Link to={`/sourcing/compare/modules?plan=${l.planId}`} className="text-sm text-ink-soft underline">
                 Compare offers for this plan →

@@ -10,7 +10,9 @@ import { demoAlternativesInput } from "./alternatives-demo";
 
 function timeSearch(siteIndex: number, copies: number) {
   const input = demoAlternativesInput(siteIndex, copies);
-  searchAlternatives(input); // warm-up (JIT)
+  const cold = performance.now();
+  searchAlternatives(input); // the first call of this input: also the JIT warm-up
+  const firstCallMs = performance.now() - cold;
   const started = performance.now();
   const result = searchAlternatives(input);
   const totalMs = performance.now() - started;
@@ -20,25 +22,38 @@ function timeSearch(siteIndex: number, copies: number) {
   const bare = searchAlternatives({ ...input, topN: 0 }, prepared);
   const enumerateMs = performance.now() - t0;
   const parts = `${input.modules.length}/${input.controllers.length}/${input.batteries.length}/${input.inverters.length}`;
-  return { result, totalMs, enumerateMs, considered: bare.considered, parts };
+  return { result, totalMs, firstCallMs, enumerateMs, considered: bare.considered, parts };
 }
 
 export function printAlternativesBench() {
-  let best = 0;
+  const tenfoldRates: number[] = [];
+  const demoMs: number[] = [];
+  let coldFirstCall: { ms: number; name: string } | null = null;
   for (const [i, demo] of DEMO_SITES.entries()) {
     for (const copies of [1, 10]) {
       const t = timeSearch(i, copies);
+      // Only the very first search of the process runs on cold (unoptimised) code.
+      coldFirstCall ??= { ms: t.firstCallMs, name: demo.plan.name };
       const rate = t.considered / (t.enumerateMs / 1000);
-      best = Math.max(best, rate);
+      if (copies === 10) tenfoldRates.push(rate);
+      else demoMs.push(t.totalMs);
       console.log(
         `  ${(copies === 1 ? "demo" : "10× catalogue").padEnd(14)} ${demo.plan.name.padEnd(24)} parts m/c/b/i ${t.parts.padEnd(12)} ${String(t.considered).padStart(9)} candidates, ` +
-          `${t.totalMs.toFixed(1).padStart(8)} ms whole search (${t.result.fullChecks} full re-plans), ${(rate / 1e6).toFixed(2)} M candidates/s enumerating`,
+          `${t.totalMs.toFixed(1).padStart(8)} ms whole search (${t.result.fullChecks} full re-plans, ${t.result.alternatives.length} kits listed; first call ${t.firstCallMs.toFixed(1)} ms), ` +
+          `${(rate / 1e6).toFixed(2)} M candidates/s enumerating`,
       );
     }
   }
+  const slowest = Math.min(...tenfoldRates);
   console.log(
-    `  candidate kits evaluated per second (best run, enumeration incl. per-site precompute): ${(best / 1e6).toFixed(2)} M/s   (target ≥ 1 M/s; whole demo search target < 1000 ms)`,
+    `  candidate kits evaluated per second (SLOWEST 10× catalogue run, enumeration incl. per-site precompute): ${(slowest / 1e6).toFixed(2)} M/s   (target ≥ 1 M/s); ` +
+      `other 10× runs ${tenfoldRates
+        .filter((r) => r !== slowest)
+        .map((r) => `${(r / 1e6).toFixed(2)}`)
+        .join(", ")} M/s`,
   );
+  console.log(`  whole demo search, slowest demo site (warm): ${Math.max(...demoMs).toFixed(1)} ms   (target < 1000 ms)`);
+  if (coldFirstCall) console.log(`  cold first call of the process (demo, ${coldFirstCall.name}): ${coldFirstCall.ms.toFixed(1)} ms whole search`);
 }
 
 if (import.meta.url === pathToFileURL(process.argv[1]).href) printAlternativesBench();

@@ -1,5 +1,6 @@
-// The ten cheapest kits that meet every check: total landed cost, cost per delivered kWh, the parts
-// with their counts and offers, what differs from the plan, and a button to use the kit.
+// The ten cheapest kits that meet every check: total landed cost, what it saves or costs more than the
+// current kit, cost per delivered kWh, the parts with their counts and offers, what differs from the
+// plan, and a button to use the kit.
 import { Form } from "react-router";
 import type { alternativesJson } from "~/lib/alternatives-view";
 
@@ -8,7 +9,7 @@ type Row = View["alternatives"][number];
 
 function PartLine({ label, part, currency }: { label: string; part: Row["module"]; currency: string }) {
   return (
-    <li>
+    <li data-testid={`part-${label.toLowerCase()}`}>
       <span className="text-ink-faint">{label}:</span> {part.quantity} × {part.label}{" "}
       <span className="text-ink-faint">
         ({part.supplierName}, <span className="figures">{part.landedCost}</span> {currency} landed)
@@ -26,6 +27,7 @@ export function AlternativesTable({ view, pending }: { view: View; pending: bool
           <tr className="border-b border-rule text-left text-ink-soft">
             <th className="py-2 pr-3">#</th>
             <th className="py-2 pr-3">Total landed cost</th>
+            <th className="py-2 pr-3">Against your kit</th>
             <th className="py-2 pr-3">Cost per delivered kWh</th>
             <th className="py-2 pr-3">Parts and counts</th>
             <th className="py-2 pr-3">What differs from the plan</th>
@@ -36,8 +38,17 @@ export function AlternativesTable({ view, pending }: { view: View; pending: bool
           {view.alternatives.map((a) => (
             <tr key={a.rank} className="border-b border-rule align-top" data-testid="alternative-row">
               <td className="py-3 pr-3 figures">{a.rank}</td>
-              <td className="py-3 pr-3 figures font-semibold whitespace-nowrap">
+              <td className="py-3 pr-3 figures font-semibold whitespace-nowrap" data-testid="total-landed">
                 {a.totalLandedCost} {c}
+              </td>
+              <td className="py-3 pr-3 figures whitespace-nowrap" data-testid="against-current">
+                {a.againstCurrentKit ? (
+                  a.againstCurrentKit.words
+                ) : (
+                  <span className="text-ink-faint" title={view.currentKit.sentence}>
+                    not known
+                  </span>
+                )}
               </td>
               <td className="py-3 pr-3 figures whitespace-nowrap">
                 {a.costPerDeliveredKWh} {c}/kWh

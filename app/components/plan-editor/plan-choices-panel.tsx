@@ -160,7 +160,7 @@ export function PlanChoicesPanel({
         </label>
       </fieldset>
       <div className="grid grid-cols-2 gap-2">
-        {(["autonomyDays", "maxDepthOfDischargePct", "designMarginPct", "acceptableUnmetDaysPerYear"] as const).map(numberInput)}
+        {(["autonomyDays", "maxDepthOfDischargePct", "designMarginPct", "acceptableUnmetDaysPerYear", "maxArrayAreaM2"] as const).map(numberInput)}
       </div>
       <h3 className="text-sm font-semibold">String layout and battery strings</h3>
       <div className="grid grid-cols-3 gap-2">{(["modulesInSeries", "stringsInParallel", "batteryStrings"] as const).map(numberInput)}</div>

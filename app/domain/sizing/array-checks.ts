@@ -70,7 +70,8 @@ export function vmpHotCheck(array: ArrayPlan, module: ModulePart, controller: Co
       `${hot} drops to ${fmt(layout.stringVmpHotV)} V at maximum power, below the ${fmt(layout.stringVmpNeededV)} V needed (${need}): ` +
       (isMppt
         ? `the ${systemVoltageV} V battery will not charge fully. Put at least ${shortest} in series.`
-        : "the battery will not charge on hot days. Choose modules of a higher voltage.");
+        : "the battery will not charge on hot days. Choose modules of a higher voltage.") +
+      (array.months.some((m) => (m.voltageFactor ?? 1) < 1) ? " The energy figures and the simulated year count the lost energy (see the assumptions)." : "");
   }
   return {
     id: "array.vmp-hot",
@@ -102,7 +103,11 @@ export function pwmMatchCheck(array: ArrayPlan, module: ModulePart, systemVoltag
   let sentence = `${matching} module(s) in series suit a ${systemVoltageV} V battery on a PWM controller.`;
   if (array.layout.modulesInSeries !== matching) {
     status = "fail";
-    sentence = `A PWM controller ties the modules to the battery: a ${systemVoltageV} V battery needs ${matching} of these in series, not ${array.layout.modulesInSeries}. The energy figures assume ${matching}.`;
+    sentence =
+      `A PWM controller ties the modules to the battery: a ${systemVoltageV} V battery needs ${matching} of these in series, not ${array.layout.modulesInSeries}. ` +
+      (array.months.some((m) => (m.voltageFactor ?? 1) < 1)
+        ? "The energy figures count only what this string can deliver (see the assumptions)."
+        : `The energy figures assume ${matching}.`);
   } else if (mismatch > 0.25) {
     status = "warn";
     sentence = `These modules (Vmp ${fmt(module.vmpV)} V) do not suit a ${systemVoltageV} V battery on a PWM controller: it holds them near the battery's voltage and much of their power is lost (see the energy figures). An MPPT controller would harvest it.`;
@@ -170,7 +175,9 @@ export function arrayEnergyCheck(array: ArrayPlan, designMarginPct: number): Pla
 
 /** Months with load but no sun on the array (polar night or a fully dark month). */
 export function darkMonthsCheck(array: ArrayPlan): PlanCheck | null {
-  const dark = array.months.filter((m) => m.loadWhPerDay > 0 && m.modulesNeeded === null).map((m) => MONTH_NAMES[m.month - 1]);
+  // A month with no energy only because the string's voltage cannot reach the battery is left to the
+  // string checks (hot-afternoon voltage, PWM match), which say why and what to change.
+  const dark = array.months.filter((m) => m.loadWhPerDay > 0 && m.modulesNeeded === null && m.voltageFactor !== 0).map((m) => MONTH_NAMES[m.month - 1]);
   if (dark.length === 0) return null;
   return {
     id: "array.dark-months",

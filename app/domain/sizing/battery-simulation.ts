@@ -1,5 +1,6 @@
 // Battery state of charge through a year, one energy balance per day. Assumptions (stated in the plan):
-// the battery starts full; everything the array delivers passes into the battery with the round-trip
+// the battery starts full unless told its starting charge (the year simulation starts it from a warm-up
+// year's end, year-simulation.ts); everything the array delivers passes into the battery with the round-trip
 // efficiency charged on the way in (daytime loads fed straight from the array escape that loss, so this
 // errs on the safe side); loads are taken from the usable energy; when the battery is full the rest of the
 // day's array energy is not taken (dumped); when it reaches its depth-of-discharge floor the rest of the
@@ -15,6 +16,8 @@ export interface BatterySimulationInput {
   /** Depth of discharge the usable energy stands for, 0–1 (to express the charge as a state of charge). */
   depthOfDischarge: number;
   roundTripEfficiency: number;
+  /** Usable energy stored before the first day, Wh; full (the first day's usable energy) when absent. */
+  initialStoredWh?: number;
 }
 
 export interface BatteryDayResults {
@@ -22,6 +25,8 @@ export interface BatteryDayResults {
   stateOfChargePct: number[];
   unmetWh: number[];
   dumpedWh: number[];
+  /** Usable energy stored at the end of the last day, Wh (to carry into a following run). */
+  endStoredWh: number;
 }
 
 export function simulateBattery(input: BatterySimulationInput): BatteryDayResults {
@@ -30,7 +35,7 @@ export function simulateBattery(input: BatterySimulationInput): BatteryDayResult
   const stateOfChargePct: number[] = new Array(days);
   const unmetWh: number[] = new Array(days);
   const dumpedWh: number[] = new Array(days);
-  let storedWh = usableCapacityWh[0];
+  let storedWh = input.initialStoredWh ?? usableCapacityWh[0];
   for (let d = 0; d < days; d++) {
     const capacityWh = usableCapacityWh[d];
     storedWh = Math.min(storedWh, capacityWh); // a colder month makes part of the charge unavailable
@@ -49,5 +54,5 @@ export function simulateBattery(input: BatterySimulationInput): BatteryDayResult
     dumpedWh[d] = dumped;
     stateOfChargePct[d] = capacityWh > 0 ? 100 * (1 - depthOfDischarge * (1 - storedWh / capacityWh)) : 0;
   }
-  return { stateOfChargePct, unmetWh, dumpedWh };
+  return { stateOfChargePct, unmetWh, dumpedWh, endStoredWh: storedWh };
 }

@@ -3,26 +3,22 @@
 // Pure: no I/O. planKit prepares the site itself; planKitForSite reuses a prepared site when many kits
 // are compared for one site.
 import { summarizeLoadSheet } from "../load/load-sheet";
-import { moduleYieldFromProfile } from "../solar/module-yield";
 import { prepareSiteProfile } from "../solar/site-profile";
 import type { SiteProfile } from "../solar/site-profile";
 import type { YieldOptions } from "../solar/yield-types";
-import { arrayMonths, moduleForEnergy, modulesRequired, withArray } from "./array-sizing";
 import { sizeBatteryBank } from "./battery-bank";
 import { inverterMaxDcCurrentA, sizeCableRuns } from "./cables";
-import { capacityTemperatureFactor, CHARGE_VOLTAGE_PER_12V } from "./chemistry";
+import { capacityTemperatureFactor } from "./chemistry";
 import type { MonthTransposition } from "./day-irradiance";
 import { monthTranspositions } from "./day-irradiance";
 import { fmt, MONTH_NAMES } from "./format";
 import { DEFAULT_INVERTER_MARGIN_PCT } from "./inverter-checks";
+import { planArray } from "./plan-array";
 import { collectPlanChecks } from "./plan-checks";
 import { PLAN_CAUTIONS, planAssumptions } from "./plan-notes";
 import { PlanInputError, planInputIssues } from "./plan-input";
 import type { InverterPlan, KitPlan, KitPlanInput, PlanSite } from "./plan-types";
 import { protectionList } from "./protection";
-import { DEFAULT_MPPT_HEADROOM_V, chooseLayout, listLayouts } from "./string-layout";
-import type { LayoutContext } from "./string-layout";
-import { hotCellTemperatureC } from "./string-voltage";
 import { simulateYear } from "./year-simulation";
 
 /** What a kit plan needs of a site that does not depend on the parts: prepare once, plan many kits. */
@@ -50,49 +46,14 @@ export function planKitForSite(prepared: PreparedPlanSite, input: KitPlanInput):
     inverter ? { efficiencyPct: inverter.efficiencyPct, idleDrawW: inverter.idleDrawW, onHoursPerDay: design.inverterOnHoursPerDay } : null,
   );
 
-  // Array: the engine's energy per module, shading, then the worst month's module count and a layout.
-  const energyModule = moduleForEnergy(module, design.powerBasis);
-  const moduleYield = moduleYieldFromProfile(
+  // Array: energy per module, the worst month's module count and a layout (plan-array.ts).
+  const { array, moduleYield, powerNote, hottestAirC, voltageNote } = planArray(
     prepared.profile,
-    energyModule.spec,
-    { kind: controller.kind, batteryVoltageV: systemVoltageV, efficiencyPct: controller.efficiencyPct },
-    design.lossesPct,
-  );
-  const shadingFactor = 1 - (site.shadingDeratePct ?? 0) / 100;
-  const roundTripEfficiency = battery.roundTripEfficiencyPct / 100;
-  const unfilled = arrayMonths(
-    moduleYield.months.map((m) => m.energyWhPerDay * shadingFactor),
+    input,
     load.months.map((m) => m.totalWhPerDay),
-    roundTripEfficiency,
-    design.designMarginPct,
   );
-  const need = modulesRequired(unfilled);
-  const hottestAirC = site.hottestTempC ?? Math.max(...site.months.map((m) => m.tMaxC));
-  const ctx: LayoutContext = {
-    module,
-    controller,
-    systemVoltageV,
-    chargeVoltageV: (systemVoltageV / 12) * CHARGE_VOLTAGE_PER_12V[battery.chemistry],
-    coldestAirC: site.coldestTempC,
-    hotCellC: hotCellTemperatureC(hottestAirC, module.noctC),
-    mpptHeadroomV: design.mpptHeadroomV ?? DEFAULT_MPPT_HEADROOM_V,
-    ratingPowerW: Math.max(module.pmaxW, energyModule.spec.pmaxW),
-  };
-  const layouts = listLayouts(need.modulesRequired, ctx);
-  const layout = chooseLayout(layouts, ctx, design.forcedLayout);
-  const array = {
-    powerBasisUsed: energyModule.basisUsed,
-    modulePmaxUsedW: energyModule.spec.pmaxW,
-    months: withArray(unfilled, layout.moduleCount),
-    designMonth: need.designMonth,
-    modulesRequired: need.modulesRequired,
-    layouts,
-    layout,
-    layoutForced: design.forcedLayout !== undefined,
-    coldestAirC: ctx.coldestAirC,
-    hotCellC: ctx.hotCellC,
-    chargeVoltageV: ctx.chargeVoltageV,
-  };
+  const { layout } = array;
+  const roundTripEfficiency = battery.roundTripEfficiencyPct / 100;
 
   // Battery: sized at its coldest monthly temperature; each month's usable energy follows that month's.
   const airMeanC = site.months.map((m) => (m.tMinC + m.tMaxC) / 2);
@@ -168,10 +129,11 @@ export function planKitForSite(prepared: PreparedPlanSite, input: KitPlanInput):
     simulation,
     checks,
     assumptions: [
-      energyModule.note,
+      powerNote,
       ...load.assumptions,
       ...moduleYield.assumptions,
       ...planAssumptions(site, design, controller, hottestAirC, batteryTempNote),
+      ...(voltageNote ? [voltageNote] : []),
       ...(simulation.constantMonths.length > 0
         ? [
             `Simulated weather in ${simulation.constantMonths.map((m) => MONTH_NAMES[m - 1]).join(", ")}: every day at the month's mean clearness index ` +

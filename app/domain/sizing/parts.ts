@@ -11,6 +11,8 @@ export interface ModulePart extends ModuleSpec {
   verifiedReadingCount?: number;
   /** The module's maximum series fuse rating from its datasheet, A, when known. */
   maxSeriesFuseA?: number | null;
+  /** Length × width from the catalogue, m², when known (for the plan's area limit). */
+  areaM2?: number | null;
 }
 
 export type BatteryChemistry = "lead-acid-flooded" | "lead-acid-agm" | "lead-acid-gel" | "lifepo4" | "nmc";

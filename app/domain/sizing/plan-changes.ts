@@ -33,6 +33,9 @@ export function describeInputChanges(saved: KitPlanInput, current: KitPlanInput)
   }
   const { verifiedPmaxW: _a, verifiedReadingCount: _b, pmaxW: _c, ...smRest } = sm;
   const { verifiedPmaxW: _d, verifiedReadingCount: _e, pmaxW: _f, ...cmRest } = cm;
+  // Plans saved before the module's area was recorded in the snapshot did not use it: its arrival is
+  // not a change of the catalogue.
+  if (smRest.areaM2 === undefined) delete cmRest.areaM2;
   if (differs(smRest, cmRest)) changes.push("Other module figures in the catalogue changed.");
   if (differs(saved.parts.controller, current.parts.controller)) changes.push("The charge controller's catalogue figures changed.");
   if (differs(saved.parts.battery, current.parts.battery)) changes.push("The battery's catalogue figures changed.");

@@ -1,6 +1,7 @@
-// Every check of a kit plan, in the order a reader goes through the kit: controller and array,
-// battery, inverter, protection and cables, then the simulated year.
+// Every check of a kit plan, in the order a reader goes through the kit: controller and array (its
+// area when the site sets a limit), battery, inverter, protection and cables, then the simulated year.
 import type { LoadSummary } from "../load/load-sheet-types";
+import { arrayAreaCheck } from "./area-check";
 import { arrayEnergyCheck, darkMonthsCheck, pwmMatchCheck, vmpHotCheck, vocColdCheck } from "./array-checks";
 import type { BatteryBankSizing } from "./battery-bank";
 import {
@@ -45,6 +46,7 @@ export function collectPlanChecks(ctx: PlanCheckContext): PlanCheck[] {
     controller.maxChargeCurrentA,
   );
   const dark = darkMonthsCheck(array);
+  const area = arrayAreaCheck(module, layout.moduleCount, design.maxArrayAreaM2);
   return [
     controllerVoltageCheck(controller, systemVoltageV),
     vocColdCheck(array, module, controller),
@@ -54,6 +56,7 @@ export function collectPlanChecks(ctx: PlanCheckContext): PlanCheck[] {
     ...(controller.kind === "mppt" ? [controllerPowerCheck(controller, layout, systemVoltageV)] : []),
     arrayEnergyCheck(array, design.designMarginPct),
     ...(dark ? [dark] : []),
+    ...(area ? [area] : []),
     batteryArrangementCheck(bank, battery, systemVoltageV),
     batteryCapacityCheck(bank, design.autonomyDays, load.maxDailyWh),
     depthOfDischargeCheck(battery, design.maxDepthOfDischargePct),

@@ -57,6 +57,8 @@ export interface DesignChoices {
   inverterOnHoursPerDay?: number;
   /** Unmet-load days a year the customer accepts (default 0). */
   acceptableUnmetDaysPerYear?: number;
+  /** Largest array area the site allows (roof, yard), m²; no limit when absent. */
+  maxArrayAreaM2?: number;
   simulation?: { seed?: number; dayToDayCorrelation?: number };
 }
 
@@ -81,7 +83,12 @@ export interface ArrayMonth {
   loadWhPerDay: number;
   /** What the array must deliver: load ÷ battery round-trip efficiency × (1 + margin), Wh/day. */
   requiredArrayWhPerDay: number;
-  /** Modules this month alone would need (fractional; null when there is no sun and some load). */
+  /**
+   * Share of the engine's energy the chosen string's voltage lets through this month (1 = all; below 1
+   * when the string is too short to charge well, string-voltage-harvest.ts). Absent in plans saved before.
+   */
+  voltageFactor?: number;
+  /** Modules this month alone would need (fractional; null when there is no usable energy and some load). */
   modulesNeeded: number | null;
   /** Energy of the chosen array, Wh/day. */
   arrayWhPerDay: number;

@@ -68,6 +68,11 @@ export interface LayoutEvaluation extends StringLayout {
   problems: string[];
 }
 
+/** Vmp a string must keep to charge: MPPT charging voltage + headroom; PWM charging voltage + switch drop, V. */
+export function neededStringVoltageV(ctx: Pick<LayoutContext, "controller" | "chargeVoltageV" | "mpptHeadroomV">): number {
+  return ctx.controller.kind === "mppt" ? ctx.chargeVoltageV + ctx.mpptHeadroomV : ctx.chargeVoltageV + PWM_SWITCH_AND_CABLE_DROP_V;
+}
+
 export function evaluateLayout(layout: StringLayout, ctx: LayoutContext): LayoutEvaluation {
   const { module, controller, systemVoltageV } = ctx;
   const { modulesInSeries: ns, stringsInParallel: np } = layout;
@@ -75,7 +80,7 @@ export function evaluateLayout(layout: StringLayout, ctx: LayoutContext): Layout
   const necFactor = nec6907aFactor(ctx.coldestAirC);
   const stringVmpHotV = ns * vmpAtCellTemperatureV(module, ctx.hotCellC);
   const isMppt = controller.kind === "mppt";
-  const stringVmpNeededV = isMppt ? ctx.chargeVoltageV + ctx.mpptHeadroomV : ctx.chargeVoltageV + PWM_SWITCH_AND_CABLE_DROP_V;
+  const stringVmpNeededV = neededStringVoltageV(ctx);
   const arrayStcPowerW = ns * np * ctx.ratingPowerW;
   const arrayMaxCurrentA = PV_MAX_CURRENT_FACTOR * np * module.iscA * Math.max(1, ctx.ratingPowerW / module.pmaxW);
   const controllerOutputCurrentA = isMppt ? (arrayStcPowerW * controller.efficiencyPct) / 100 / systemVoltageV : arrayMaxCurrentA;
@@ -138,32 +143,36 @@ export function evaluateLayout(layout: StringLayout, ctx: LayoutContext): Layout
 
 /**
  * Every string length the controller allows voltage-wise (MPPT: 1…the longest under its Voc limit;
- * PWM: the one that matches the battery), each with enough strings for `modulesNeeded`.
+ * PWM: the one that matches the battery), each with enough strings for `modulesNeeded` — a number, or
+ * per string length when a short string's low voltage cuts each module's energy (kit-plan.ts).
  */
-export function listLayouts(modulesNeeded: number, ctx: LayoutContext): LayoutEvaluation[] {
-  const needed = Math.max(1, Math.ceil(modulesNeeded - 1e-9));
+export function listLayouts(modulesNeeded: number | ((modulesInSeries: number) => number), ctx: LayoutContext): LayoutEvaluation[] {
+  const neededFor = (ns: number) => Math.max(1, Math.ceil((typeof modulesNeeded === "number" ? modulesNeeded : modulesNeeded(ns)) - 1e-9));
   if (ctx.controller.kind === "pwm") {
     const ns = pwmModulesInSeries(ctx.systemVoltageV, ctx.module.vmpV);
-    return [evaluateLayout({ modulesInSeries: ns, stringsInParallel: Math.ceil(needed / ns) }, ctx)];
+    return [evaluateLayout({ modulesInSeries: ns, stringsInParallel: Math.ceil(neededFor(ns) / ns) }, ctx)];
   }
   const vocColdModuleV = vocAtTemperatureV(ctx.module, ctx.coldestAirC);
   const longest = Math.min(MAX_MODULES_IN_SERIES, Math.max(1, Math.floor(ctx.controller.maxPvVocV / vocColdModuleV)));
   const layouts: LayoutEvaluation[] = [];
-  for (let ns = 1; ns <= longest; ns++) layouts.push(evaluateLayout({ modulesInSeries: ns, stringsInParallel: Math.ceil(needed / ns) }, ctx));
+  for (let ns = 1; ns <= longest; ns++) layouts.push(evaluateLayout({ modulesInSeries: ns, stringsInParallel: Math.ceil(neededFor(ns) / ns) }, ctx));
   return layouts;
 }
 
 /**
  * The layout to use: the caller's forced one if given; else the valid layout with the fewest modules,
- * then the fewest strings (fewer string fuses and combiner parts); else, so the plan still shows its
- * failures, the fewest-module layout that is at least safe on voltage, else the shortest string.
+ * then the fewest strings (fewer string fuses and combiner parts). When none is valid the plan still
+ * shows its failures, choosing in this order: safe on the cold-morning voltage and able to charge on a
+ * hot afternoon (it only clips at the controller's current or power limit, which loses energy but can
+ * charge); else safe on voltage (it charges poorly, see kit-plan.ts); else the shortest string.
  */
 export function chooseLayout(layouts: readonly LayoutEvaluation[], ctx: LayoutContext, forced?: StringLayout): LayoutEvaluation {
   if (forced) return evaluateLayout(forced, ctx);
   const byModulesThenStrings = (a: LayoutEvaluation, b: LayoutEvaluation) => a.moduleCount - b.moduleCount || a.stringsInParallel - b.stringsInParallel;
-  const valid = layouts.filter((l) => l.valid).sort(byModulesThenStrings);
-  if (valid.length > 0) return valid[0];
-  const voltageSafe = layouts.filter((l) => l.vocOk).sort(byModulesThenStrings);
-  if (voltageSafe.length > 0) return voltageSafe[0];
+  const tiers = [(l: LayoutEvaluation) => l.valid, (l: LayoutEvaluation) => l.vocOk && l.vmpStatus !== "fail", (l: LayoutEvaluation) => l.vocOk];
+  for (const inTier of tiers) {
+    const found = layouts.filter(inTier).sort(byModulesThenStrings);
+    if (found.length > 0) return found[0];
+  }
   return layouts[0] ?? evaluateLayout({ modulesInSeries: 1, stringsInParallel: 1 }, ctx);
 }

@@ -1,6 +1,9 @@
 // The simulated year of a kit plan: daily weather (weather-year.ts), the array's energy on each day
 // (day-irradiance.ts scaling of the engine's monthly energy), and the battery's daily balance
-// (battery-simulation.ts). The result states the days with unmet load.
+// (battery-simulation.ts). The result states the days with unmet load. The battery does not start the
+// reported year full: the same weather year is run once before it from full (a warm-up), and the
+// reported year starts from the charge that warm-up ends 31 December with, as a bank in its second year
+// would. Starting full would hand a northern site a free full charge going into its worst months.
 import { simulateBattery } from "./battery-simulation";
 import type { MonthTransposition } from "./day-irradiance";
 import { expectedPlaneOfArrayKWhM2, planeOfArrayForDayKWhM2 } from "./day-irradiance";
@@ -57,6 +60,8 @@ export interface YearSimulation {
   /** Share of the year's load that was met, %. */
   loadMetPct: number;
   minStateOfChargePct: number;
+  /** State of charge the reported year starts from: the warm-up year's at the end of 31 December, %. */
+  startStateOfChargePct: number;
 }
 
 export function simulateYear(input: YearSimulationInput): YearSimulation {
@@ -82,13 +87,15 @@ export function simulateYear(input: YearSimulationInput): YearSimulation {
     loadWh[d] = input.months[i].loadWhPerDay;
     usableCapacityWh[d] = input.months[i].usableCapacityWh;
   }
-  const battery = simulateBattery({
+  const batteryInput = {
     harvestWh,
     loadWh,
     usableCapacityWh,
     depthOfDischarge: input.depthOfDischarge,
     roundTripEfficiency: input.roundTripEfficiency,
-  });
+  };
+  const warmUp = simulateBattery(batteryInput);
+  const battery = simulateBattery({ ...batteryInput, initialStoredWh: warmUp.endStoredWh });
 
   const months: SimulatedMonth[] = [];
   for (let m = 1; m <= 12; m++) {
@@ -129,5 +136,6 @@ export function simulateYear(input: YearSimulationInput): YearSimulation {
     loadKWh,
     loadMetPct: loadKWh > 0 ? 100 * (1 - unmetKWh / loadKWh) : 100,
     minStateOfChargePct: Math.min(...battery.stateOfChargePct),
+    startStateOfChargePct: warmUp.stateOfChargePct[DAYS_IN_YEAR - 1],
   };
 }

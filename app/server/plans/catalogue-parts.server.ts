@@ -29,6 +29,7 @@ export async function findModulePart(id: string): Promise<NamedPart<ModulePart> 
       cellsInSeries: m.cells_in_series,
       verifiedPmaxW: m.verified_pmax_w,
       verifiedReadingCount: m.verified_reading_count,
+      areaM2: m.area_m2,
     },
   };
 }

@@ -53,6 +53,7 @@ export async function buildPlanInput(teamId: string, choices: PlanChoices): Prom
       forcedLayout: d.modulesInSeries && d.stringsInParallel ? { modulesInSeries: d.modulesInSeries, stringsInParallel: d.stringsInParallel } : undefined,
       forcedBatteryStrings: d.batteryStrings,
       acceptableUnmetDaysPerYear: d.acceptableUnmetDaysPerYear,
+      maxArrayAreaM2: d.maxArrayAreaM2,
       simulation: d.simulationSeed !== undefined ? { seed: d.simulationSeed } : undefined,
     },
   };

@@ -11,6 +11,7 @@ import { addRevision, findPlan } from "../plans/plans.server";
 import { listValidOffers, type OfferListItem } from "./offers.server";
 import { loadTeamPricing } from "./settings.server";
 import { minorDigits } from "~/domain/money/money";
+import { missedChecks } from "~/domain/sourcing/alternatives/meets-plan";
 import { searchAlternatives } from "~/domain/sourcing/alternatives/search";
 import type { AlternativesResult, CandidatePart, OfferPrice } from "~/domain/sourcing/alternatives/types";
 import { costOffer, type TeamPricing } from "~/domain/sourcing/offer-costing";
@@ -102,6 +103,7 @@ export async function findAlternatives(teamId: string, planId: string): Promise<
   const result = searchAlternatives({
     base,
     current: { moduleId: choices.moduleId, controllerId: choices.controllerId, batteryId: choices.batteryId, inverterId: choices.inverterId },
+    currentLabels: built.sources.parts,
     currency: pricing.quotingCurrency,
     modules: modules.parts,
     controllers: controllers.parts,
@@ -138,9 +140,16 @@ export async function applyAlternative(teamId: string, userId: string, planId: s
   };
   const outcome = await planFromChoices(teamId, choices);
   if (!outcome.ok) return { ok: false, status: 400, message: outcome.message, fields: outcome.fields };
-  const failing = outcome.plan.checks.filter((c) => c.status === "fail");
-  if (failing.length)
-    return { ok: false, status: 409, message: `This kit no longer meets every check (${failing.map((c) => c.title).join(", ")}): search again.`, fields: {} };
+  // The same rule the search listed the kit by: no failing check, unmet days within the plan's target.
+  const missed = missedChecks(outcome.plan);
+  if (missed.length) {
+    return {
+      ok: false,
+      status: 409,
+      message: `This kit no longer meets every check and target of the plan (${missed.map((c) => c.title).join(", ")}): search again.`,
+      fields: {},
+    };
+  }
   const p = outcome.sources.parts;
   const layout = outcome.plan.array.layout;
   const note =

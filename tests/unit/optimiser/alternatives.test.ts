@@ -3,6 +3,7 @@
 // site is Duffie & Beckman Example 2.19.1 (Madison) as in the sizing tests.
 import { describe, expect, it } from "vitest";
 import { planKit } from "~/domain/sizing/kit-plan";
+import { meetsPlan } from "~/domain/sourcing/alternatives/meets-plan";
 import { candidateInput } from "~/domain/sourcing/alternatives/report";
 import { searchAlternatives } from "~/domain/sourcing/alternatives/search";
 import type { AlternativesInput, KitAlternative } from "~/domain/sourcing/alternatives/types";
@@ -42,6 +43,11 @@ describe("kit alternatives on a small invented catalogue", () => {
       smallCatalogueInput({ base: hutPlanInput({ acceptableUnmetDaysPerYear: 0, autonomyDays: 1 }) }),
     ],
     ["verified power basis", smallCatalogueInput({ base: hutPlanInput({ acceptableUnmetDaysPerYear: 5, powerBasis: "verified" }) })],
+    [
+      "one unmet day, one day of autonomy, no extra battery string (only a bigger array meets the target)",
+      smallCatalogueInput({ base: hutPlanInput({ acceptableUnmetDaysPerYear: 1, autonomyDays: 1 }), extraBatteryStrings: 0 }),
+    ],
+    ["an array area limit of 4 m²", smallCatalogueInput({ base: hutPlanInput({ acceptableUnmetDaysPerYear: 5, maxArrayAreaM2: 4 }) })],
   ];
 
   for (const [name, input] of cases) {
@@ -55,10 +61,14 @@ describe("kit alternatives on a small invented catalogue", () => {
         expect(result.exhausted).toBe(false);
       });
 
-      it("never returns a kit that fails a check when planned in full", () => {
+      it("never returns a kit that fails a check or goes over the accepted unmet days when planned in full", () => {
+        const accepted = input.base.design.acceptableUnmetDaysPerYear ?? 0;
         for (const a of result.alternatives) {
           const plan = replan(input, a);
           expect(plan.checks.filter((c) => c.status === "fail").map((c) => c.id)).toEqual([]);
+          expect(plan.simulation.unmetDays).toBeLessThanOrEqual(accepted);
+          expect(plan.checks.find((c) => c.id === "simulation.unmet-days")?.status).toBe("pass");
+          expect(meetsPlan(plan)).toBe(true);
           expect(plan.array.layout.moduleCount).toBe(a.module.quantity);
           expect(plan.battery.batteryCount).toBe(a.battery.quantity);
         }
@@ -72,6 +82,51 @@ describe("kit alternatives on a small invented catalogue", () => {
       });
     });
   }
+
+  it("with no unmet day accepted, every kit's simulated year meets the load every day", () => {
+    const input = cases[1][1];
+    const result = searchAlternatives(input);
+    expect(result.alternatives.length).toBe(10);
+    expect(result.overUnmetDays).toBeGreaterThan(0); // the target dropped kits the checks alone would list
+    for (const a of result.alternatives) expect(replan(input, a).simulation.unmetDays).toBe(0);
+  });
+
+  it("tries up to two more strings per string length, and finds cheaper kits within the target that way", () => {
+    const input = cases[3][1];
+    const narrow = searchAlternatives({ ...input, extraArrayStrings: 0 });
+    const wide = searchAlternatives(input);
+    expect(wide.considered).toBe(3 * narrow.considered);
+    expect(wide.alternatives.length).toBeGreaterThan(narrow.alternatives.length);
+    expect(wide.alternatives[0].totalMinor).toBeLessThan(narrow.alternatives[0].totalMinor);
+    // The cheapest kit has more strings in parallel than the worst month's energy needs.
+    const first = wide.alternatives[0];
+    const fewest = Math.ceil(replan(input, first).array.modulesRequired / first.layout.modulesInSeries);
+    expect(first.layout.stringsInParallel).toBeGreaterThan(fewest);
+    expect(wide.targetNote).toBe(
+      `Only ${wide.alternatives.length} kits are listed: ${wide.overUnmetDays} of the ${wide.fullChecks} kits re-planned in full went over the 1 unmet-load day a year this plan accepts; allow more days or more autonomy to see more.`,
+    );
+  });
+
+  it("says plainly when the unmet-days target leaves no kit", () => {
+    const result = searchAlternatives({ ...cases[1][1], extraBatteryStrings: 0, extraArrayStrings: 0 });
+    expect(result.alternatives).toEqual([]);
+    expect(result.overUnmetDays).toBe(result.fullChecks);
+    expect(result.targetNote).toBe(
+      `None of the ${result.fullChecks} kits re-planned in full stayed within the 0 unmet-load days a year this plan accepts; allow more days or more autonomy.`,
+    );
+  });
+
+  it("never returns a kit over the area limit, though the cheapest kit without it is over", () => {
+    const unlimited = searchAlternatives(cases[0][1]).alternatives[0];
+    expect(unlimited.module).toMatchObject({ id: "mod-100", quantity: 6 }); // 6 × 0.67 = 4.02 m² > 4 m²
+    const limited = searchAlternatives(cases[4][1]);
+    const area = { "mod-100": 0.67, "mod-160": 1.4652, "mod-200": 0.9916 } as Record<string, number>;
+    expect(limited.alternatives.length).toBe(10);
+    for (const a of limited.alternatives) expect(a.module.quantity * area[a.module.id]).toBeLessThanOrEqual(4);
+    expect(limited.alternatives.map(summary)).not.toContainEqual(summary(unlimited));
+    expect(limited.alternatives[0].totalMinor).toBeGreaterThan(unlimited.totalMinor);
+    expect(limited.pruned.find((p) => p.reason.startsWith("Layouts whose modules cover more than"))?.count).toBeGreaterThan(0);
+  });
 
   it("drops candidates that pass the cheap tests but fail the full plan (the string-fuse check)", () => {
     const result = searchAlternatives(cases[0][1]);

@@ -1,7 +1,8 @@
 // An invented small catalogue and offers for the optimiser tests (no real product or supplier). Prices
 // are in euro cents; a "shipping" amount is per order. The 160 W module's 8 A maximum series fuse is
 // below 1.56 × Isc, so any layout of it with three or more strings (e.g. on the PWM controller, one in
-// series) fails the string-fuse check — a check only the full plan makes.
+// series) fails the string-fuse check — a check only the full plan makes. Module areas (m²) are
+// length × width of invented sizes: 1000 × 670, 1480 × 990 and 1480 × 670 mm.
 import type { BatteryPart, ControllerPart, InverterPart, ModulePart } from "~/domain/sizing/parts";
 import type { AlternativesInput, CandidatePart, OfferPrice } from "~/domain/sourcing/alternatives/types";
 import { hutPlanInput } from "../sizing/plan-fixtures";
@@ -25,11 +26,16 @@ function part<P>(id: string, p: P, offers: OfferPrice[]): CandidatePart<P> {
 const MODULE_BASE = { vmpV: 18.2, vocV: 22.1, gammaPmaxPctPerC: -0.4, betaVocPctPerC: -0.3, alphaIscPctPerC: 0.05, noctC: 45, cellsInSeries: 36 };
 
 export const MODULES = [
-  part<ModulePart>("mod-100", { ...MODULE_BASE, pmaxW: 100, impA: 5.5, iscA: 5.9 }, [offer("o-m100-a", 9000, 2500), offer("o-m100-b", 9500, 0, [[6, 8200]])]),
-  part<ModulePart>("mod-160", { ...MODULE_BASE, vmpV: 30.5, vocV: 37.2, pmaxW: 160, impA: 5.25, iscA: 5.6, cellsInSeries: 60, maxSeriesFuseA: 8 }, [
-    offer("o-m160", 13000, 3000),
+  part<ModulePart>("mod-100", { ...MODULE_BASE, pmaxW: 100, impA: 5.5, iscA: 5.9, areaM2: 0.67 }, [
+    offer("o-m100-a", 9000, 2500),
+    offer("o-m100-b", 9500, 0, [[6, 8200]]),
   ]),
-  part<ModulePart>("mod-200", { ...MODULE_BASE, pmaxW: 200, impA: 11, iscA: 11.8 }, [offer("o-m200", 17500, 4000)]),
+  part<ModulePart>(
+    "mod-160",
+    { ...MODULE_BASE, vmpV: 30.5, vocV: 37.2, pmaxW: 160, impA: 5.25, iscA: 5.6, cellsInSeries: 60, maxSeriesFuseA: 8, areaM2: 1.4652 },
+    [offer("o-m160", 13000, 3000)],
+  ),
+  part<ModulePart>("mod-200", { ...MODULE_BASE, pmaxW: 200, impA: 11, iscA: 11.8, areaM2: 0.9916 }, [offer("o-m200", 17500, 4000)]),
 ];
 
 export const CONTROLLERS = [

@@ -33,6 +33,20 @@ describe("what changed since a plan was saved", () => {
     expect(changes).toMatch(/load sheet changed/);
   });
 
+  it("does not call the module's area a change for a plan saved before areas were kept, but sees a changed area", () => {
+    const saved = base();
+    const { areaM2: _area, ...withoutArea } = saved.parts.module;
+    saved.parts.module = withoutArea;
+    const current = base();
+    current.parts.module = { ...current.parts.module, areaM2: 1.69 };
+    expect(describeInputChanges(saved, current)).toEqual([]);
+    const resized = base();
+    resized.parts.module = { ...resized.parts.module, areaM2: 1.69 };
+    const larger = base();
+    larger.parts.module = { ...larger.parts.module, areaM2: 1.8 };
+    expect(describeInputChanges(resized, larger)).toEqual(["Other module figures in the catalogue changed."]);
+  });
+
   it("still sees a real difference deep inside", () => {
     expect(differs({ a: [1, { b: 2 }] }, { a: [1, { b: 3 }] })).toBe(true);
     expect(differs({ a: 1, b: undefined }, { a: 1 })).toBe(false);

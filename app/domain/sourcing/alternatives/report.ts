@@ -1,11 +1,14 @@
 // From the cheapest candidates to the kits shown: each is re-planned in full (planKit with the
-// candidate's parts, string layout and battery strings forced) and kept only when no check fails; one
-// row per set of parts (its cheapest passing layout and bank), with cost per delivered kWh and what
-// differs from the current plan.
+// candidate's parts, string layout and battery strings forced) and kept only when it meets the plan (no
+// check fails and the unmet-days target holds: meets-plan.ts); one row per set of parts (its cheapest
+// passing layout and bank), with cost per delivered kWh and what differs from the current plan, and the
+// current kit costed the same way.
 import Decimal from "decimal.js";
 import { minorDigits } from "../../money/money";
 import { planKitForSite, type PreparedPlanSite } from "../../sizing/kit-plan";
 import type { KitPlan, KitPlanInput } from "../../sizing/plan-types";
+import { currentKitCost } from "./current-kit";
+import { kitVerdict, unmetTargetNote } from "./meets-plan";
 import { PartPrices } from "./price-table";
 import type { Candidate } from "./top-list";
 import type { AlternativesInput, CandidatePart, ChosenPart, KitAlternative } from "./types";
@@ -29,10 +32,6 @@ export function candidateInput(input: AlternativesInput, c: Candidate): KitPlanI
       forcedBatteryStrings: c.batteryStrings,
     },
   };
-}
-
-export function passesEveryCheck(plan: KitPlan): boolean {
-  return !plan.checks.some((check) => check.status === "fail");
 }
 
 /** Energy the appliances use in a year (before inverter and battery losses), kWh. */
@@ -73,14 +72,17 @@ export function buildAlternatives(input: AlternativesInput, prepared: PreparedPl
   const alternatives: KitAlternative[] = [];
   let fullChecks = 0;
   let fullCheckFailures = 0;
+  let overUnmetDays = 0;
   for (const c of sorted) {
     if (alternatives.length >= topN) break;
     const key = `${c.mi}|${c.ci}|${c.bi}|${c.ii}`;
     if (seen.has(key)) continue; // a cheaper layout or bank of these parts already passed
     fullChecks += 1;
     const plan = planKitForSite(prepared, candidateInput(input, c));
-    if (!passesEveryCheck(plan)) {
+    const verdict = kitVerdict(plan);
+    if (!verdict.meets) {
       fullCheckFailures += 1;
+      if (verdict.overUnmetDays) overUnmetDays += 1;
       continue;
     }
     seen.add(key);
@@ -113,10 +115,15 @@ export function buildAlternatives(input: AlternativesInput, prepared: PreparedPl
       (alt.inverter?.id ?? null) === cur.inverterId;
     alternatives.push(alt);
   }
+  const acceptedUnmetDays = input.base.design.acceptableUnmetDaysPerYear ?? 0;
   return {
     alternatives,
     fullChecks,
     fullCheckFailures,
+    overUnmetDays,
+    acceptedUnmetDays,
+    targetNote: unmetTargetNote({ listed: alternatives.length, topN, fullChecks, overUnmetDays, acceptedDays: acceptedUnmetDays }),
+    current: currentKitCost(input, current),
     exhausted: alternatives.length < topN && sorted.length >= (input.maxFullChecks ?? DEFAULT_MAX_FULL_CHECKS),
     lifetimeNote: `Cost per delivered kWh = total landed cost ÷ (the load's energy at the appliances over a year × lifetime), the lifetime being the shorter of ${maxYears} years and the battery's rated cycles at one cycle a day (common practice, no source). Replacement parts, labour and interest are not included.`,
   };

@@ -1,12 +1,15 @@
 // Kit alternatives: every combination of the team's offered parts, string layout and battery bank that
 // could meet the plan's checks, ranked by total landed cost. Work done once (per site and part) lives
 // in precompute.ts; the inner loop is twelve divisions for the module count, a few multiplications for
-// the controller's current and power limits and four integer additions for the cost. The cheapest
-// candidates are then re-planned in full with planKit and a kit with any failing check is dropped, so
-// the list holds only kits that meet every check. Pruning skips only what cannot be a cheaper valid
-// kit: dearer offers of the same part at the same quantity, and parts or layouts that fail a check
-// whatever else is chosen.
+// the controller's current and power limits and the array's area, and four integer additions for the
+// cost. Per string length it tries the fewest strings the worst month needs and a few more, since a
+// bigger array is what brings the simulated year's unmet-load days within the plan's target. The
+// cheapest candidates are then re-planned in full with planKit and a kit that fails a check or misses
+// the target is dropped (meets-plan.ts). Pruning skips only what cannot be a cheaper valid kit: dearer
+// offers of the same part at the same quantity, and parts or layouts that fail a check whatever else is
+// chosen.
 import { preparePlanSite, type PreparedPlanSite } from "../../sizing/kit-plan";
+import { arrayAreaM2, knownModuleAreaM2 } from "../../sizing/area-check";
 import { PV_MAX_CURRENT_FACTOR } from "../../sizing/fuses";
 import { bankOptions, chargeVoltageV, loadOptions, modulePair, usableControllers, voltageValidSeries } from "./precompute";
 import { PartPrices } from "./price-table";
@@ -15,6 +18,8 @@ import { TopList, type Candidate } from "./top-list";
 import type { AlternativesInput, AlternativesResult } from "./types";
 
 export const DEFAULT_EXTRA_BATTERY_STRINGS = 2;
+/** Parallel strings tried beyond the fewest the worst month needs, per string length. */
+export const DEFAULT_EXTRA_ARRAY_STRINGS = 2;
 /** The plan form's limits (app/lib/plan-choices.ts): a kit beyond them could not be applied. */
 export const MAX_STRINGS_IN_PARALLEL = 100;
 
@@ -23,6 +28,7 @@ const OVER_LIMIT = "Layouts over the controller's charge current or rated PV pow
 const NO_STRING = "Module–controller pairs with no string length inside the voltage limits";
 const TOO_MANY_STRINGS = "Layouts with more than 100 strings in parallel (beyond what a plan takes)";
 const BANK_FAILS = "Battery banks that fail a battery check (arrangement, cold, discharge rate…)";
+const OVER_AREA = "Layouts whose modules cover more than the largest array area the site allows";
 
 export function searchAlternatives(
   input: AlternativesInput,
@@ -41,6 +47,9 @@ export function searchAlternatives(
   const batteryPrices = input.batteries.map((b) => new PartPrices(b.offers));
   const top = new TopList(input.maxFullChecks ?? DEFAULT_MAX_FULL_CHECKS);
   const marginFactor = 1 + design.designMarginPct / 100;
+  const extraStrings = input.extraArrayStrings ?? DEFAULT_EXTRA_ARRAY_STRINGS;
+  const maxAreaM2 = design.maxArrayAreaM2;
+  const moduleAreas = input.modules.map((m) => (maxAreaM2 === undefined ? null : knownModuleAreaM2(m.part)));
   const required = new Float64Array(12);
   let considered = 0;
   let dominated = 0;
@@ -76,48 +85,56 @@ export function searchAlternatives(
           const offerCombos = pair.module.offers.length * controller.offers.length * battery.offers.length * inverterOffers;
           const iscA = pair.module.part.iscA;
           const overRating = Math.max(1, pair.ratingPowerW / pair.module.part.pmaxW);
+          const moduleAreaM2 = moduleAreas[mi];
           for (const ns of series) {
-            const np = Math.ceil(needed / ns);
-            if (np > MAX_STRINGS_IN_PARALLEL) {
-              prune(TOO_MANY_STRINGS);
-              continue;
-            }
-            const moduleCount = ns * np;
-            considered += bankCosts.length;
-            dominated += (offerCombos - 1) * bankCosts.length;
-            const powerW = moduleCount * pair.ratingPowerW;
-            // The same arithmetic, in the same order, as evaluateLayout (string-layout.ts).
-            const overLimit = isMppt
-              ? (powerW * c.efficiencyPct) / 100 / systemVoltageV > c.maxChargeCurrentA || ratedPowerW === undefined || powerW > ratedPowerW
-              : PV_MAX_CURRENT_FACTOR * np * iscA * overRating > c.maxChargeCurrentA;
-            if (overLimit) {
-              prune(OVER_LIMIT, bankCosts.length);
-              continue;
-            }
-            const moduleCost = modulePrices[mi].costAt(moduleCount);
-            for (let k = 0; k < bankCosts.length; k++) {
-              const total = fixedCost + moduleCost + bankCosts[k];
-              if (Number.isNaN(total)) {
-                prune(NO_PRICE);
+            const fewest = Math.ceil(needed / ns);
+            for (let np = fewest; np <= fewest + extraStrings; np++) {
+              if (np > MAX_STRINGS_IN_PARALLEL) {
+                prune(TOO_MANY_STRINGS);
                 continue;
               }
-              if (!top.admits(total)) continue;
-              const bank = banks.options[k].bank;
-              const candidate: Candidate = {
-                totalMinor: total,
-                moduleCount,
-                modulesInSeries: ns,
-                stringsInParallel: np,
-                batteryStrings: banks.options[k].strings,
-                mi,
-                ci: input.controllers.indexOf(controller),
-                bi,
-                ii,
-                moduleCostMinor: moduleCost,
-                batteryCount: bank.batteryCount,
-                batteryCostMinor: bankCosts[k],
-              };
-              top.add(candidate);
+              const moduleCount = ns * np;
+              considered += bankCosts.length;
+              dominated += (offerCombos - 1) * bankCosts.length;
+              const powerW = moduleCount * pair.ratingPowerW;
+              // The same arithmetic, in the same order, as evaluateLayout (string-layout.ts).
+              const overLimit = isMppt
+                ? (powerW * c.efficiencyPct) / 100 / systemVoltageV > c.maxChargeCurrentA || ratedPowerW === undefined || powerW > ratedPowerW
+                : PV_MAX_CURRENT_FACTOR * np * iscA * overRating > c.maxChargeCurrentA;
+              if (overLimit) {
+                prune(OVER_LIMIT, bankCosts.length);
+                continue;
+              }
+              // The same test as the plan's array.area check (area-check.ts).
+              if (moduleAreaM2 !== null && maxAreaM2 !== undefined && arrayAreaM2(moduleCount, moduleAreaM2) > maxAreaM2) {
+                prune(OVER_AREA, bankCosts.length);
+                continue;
+              }
+              const moduleCost = modulePrices[mi].costAt(moduleCount);
+              for (let k = 0; k < bankCosts.length; k++) {
+                const total = fixedCost + moduleCost + bankCosts[k];
+                if (Number.isNaN(total)) {
+                  prune(NO_PRICE);
+                  continue;
+                }
+                if (!top.admits(total)) continue;
+                const bank = banks.options[k].bank;
+                const candidate: Candidate = {
+                  totalMinor: total,
+                  moduleCount,
+                  modulesInSeries: ns,
+                  stringsInParallel: np,
+                  batteryStrings: banks.options[k].strings,
+                  mi,
+                  ci: input.controllers.indexOf(controller),
+                  bi,
+                  ii,
+                  moduleCostMinor: moduleCost,
+                  batteryCount: bank.batteryCount,
+                  batteryCostMinor: bankCosts[k],
+                };
+                top.add(candidate);
+              }
             }
           }
         });

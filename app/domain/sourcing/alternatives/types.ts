@@ -30,6 +30,8 @@ export interface AlternativesInput {
   /** The saved plan's input: site, loads, system voltage, design. Its parts are the current kit. */
   base: KitPlanInput;
   current: PartIds;
+  /** Names of the current parts, for saying which has no offer. */
+  currentLabels?: { module: string; controller: string; battery: string; inverter: string | null };
   currency: string;
   modules: readonly CandidatePart<ModulePart>[];
   controllers: readonly CandidatePart<ControllerPart>[];
@@ -39,6 +41,8 @@ export interface AlternativesInput {
   topN?: number;
   /** Battery banks tried: the autonomy size and up to this many extra parallel strings (2). */
   extraBatteryStrings?: number;
+  /** Arrays tried per string length: the fewest modules the worst month needs and up to this many extra parallel strings (2). */
+  extraArrayStrings?: number;
   /** Cheapest candidates kept for the full re-check (400); the search says when that was not enough. */
   maxFullChecks?: number;
   /** Years a kit is costed over at most (10); a battery with fewer rated cycles shortens it. */
@@ -77,6 +81,17 @@ export interface PruneCount {
   count: number;
 }
 
+export interface CurrentKitCost {
+  /** The current kit at the team's cheapest valid offers, minor units; null when a part cannot be costed. */
+  totalMinor: number | null;
+  moduleCount: number | null;
+  batteryCount: number | null;
+  /** Whether the current kit itself meets every check and the unmet-days target (null: it cannot be planned). */
+  meetsPlan: boolean | null;
+  /** Why it cannot be costed, in plain words ("no valid offer for …"). */
+  problems: string[];
+}
+
 export interface AlternativesResult {
   alternatives: KitAlternative[];
   currency: string;
@@ -86,7 +101,15 @@ export interface AlternativesResult {
   dominatedOfferCombinations: number;
   pruned: PruneCount[];
   fullChecks: number;
+  /** Re-planned kits dropped: a check failed or the unmet-days target was missed. */
   fullCheckFailures: number;
+  /** Of those, the kits whose simulated year had more unmet-load days than the plan accepts. */
+  overUnmetDays: number;
+  /** Unmet-load days a year the plan accepts. */
+  acceptedUnmetDays: number;
+  /** Set when the unmet-days target left the list empty or short, in plain words. */
+  targetNote: string | null;
+  current: CurrentKitCost;
   /** True when the kept cheapest candidates ran out before topN kits passed: the list may be short. */
   exhausted: boolean;
   lifetimeNote: string;
