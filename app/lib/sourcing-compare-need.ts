@@ -1,6 +1,6 @@
 // The comparison page keeps what it is asked to meet in its URL (?energy=2.4&sun=3&…), so a view can
 // be bookmarked and shared. A bad value is named at its field and the default is used meanwhile.
-// Later a ?plan=<id> will fill the same ComparisonNeed from a saved kit plan.
+// A ?plan=<id> fills the same fields once from a saved kit plan (sourcing.compare.tsx).
 import { DEFAULT_NEED, DEFAULT_QUANTITY, type ComparisonNeed } from "~/domain/sourcing/comparison-need";
 import type { OfferPartKind } from "~/domain/sourcing/offer-facts";
 
@@ -17,6 +17,9 @@ export const NEED_PARAMS = {
   losses: { label: "System losses (%)", min: 0, max: 60 },
   qty: { label: "Quantity", min: 1, max: 10000, integer: true },
   bank: { label: "Battery bank (V)", min: 6, max: 120, integer: true },
+  store: { label: "Usable energy to store (kWh)", min: 0.01, max: 10000 },
+  btemp: { label: "Coldest battery temperature (°C)", min: -40, max: 60 },
+  dod: { label: "Depth of discharge limit (%)", min: 5, max: 100 },
   array: { label: "Array power (W at STC)", min: 1, max: 100000 },
   peak: { label: "Peak AC load (W)", min: 1, max: 100000 },
 } as const satisfies Record<string, ParamRule>;
@@ -26,7 +29,7 @@ export type NeedParam = keyof typeof NEED_PARAMS;
 /** Which fields each kind's form shows. */
 export const NEED_FIELDS: Record<OfferPartKind, NeedParam[]> = {
   modules: ["energy", "sun", "losses", "qty"],
-  batteries: ["qty"],
+  batteries: ["store", "bank", "btemp", "dod", "qty"],
   controllers: ["qty", "array", "bank"],
   inverters: ["qty", "peak", "bank"],
 };
@@ -39,6 +42,9 @@ export function defaultParamValues(kind: OfferPartKind): Record<NeedParam, strin
     losses: String(DEFAULT_NEED.systemLossesPct),
     qty: quantity === null ? "" : String(quantity),
     bank: String(DEFAULT_NEED.batteryVoltageV),
+    store: String(DEFAULT_NEED.bankUsableWh / 1000),
+    btemp: String(DEFAULT_NEED.batteryTempC),
+    dod: DEFAULT_NEED.maxDepthOfDischargePct === null ? "" : String(DEFAULT_NEED.maxDepthOfDischargePct),
     array: String(DEFAULT_NEED.arrayPowerW),
     peak: String(DEFAULT_NEED.peakAcLoadW),
   };
@@ -54,8 +60,11 @@ export interface NeedFromUrl {
 function readParam(param: NeedParam, text: string | null): { value?: number; error?: string } {
   if (text === null || text.trim() === "") return {};
   const rule: ParamRule = NEED_PARAMS[param];
-  const value = Number(text.trim());
-  if (!/^\d+(\.\d+)?$/.test(text.trim()) || !Number.isFinite(value)) return { error: `${rule.label}: enter a number such as ${rule.integer ? "4" : "2.4"}.` };
+  // A typed minus sign (U+2212) is read as the hyphen-minus a number needs.
+  const typed = text.trim().replace(/^\u2212/, "-");
+  const value = Number(typed);
+  const pattern = rule.min < 0 ? /^-?\d+(\.\d+)?$/ : /^\d+(\.\d+)?$/;
+  if (!pattern.test(typed) || !Number.isFinite(value)) return { error: `${rule.label}: enter a number such as ${rule.integer ? "4" : "2.4"}.` };
   if (rule.integer && !Number.isInteger(value)) return { error: `${rule.label}: enter a whole number.` };
   if (value < rule.min || value > rule.max) return { error: `${rule.label}: from ${rule.min} to ${rule.max}.` };
   return { value };
@@ -78,6 +87,9 @@ export function needFromSearchParams(kind: OfferPartKind, params: URLSearchParam
     sunHoursPerDay: read.sun ?? DEFAULT_NEED.sunHoursPerDay,
     systemLossesPct: read.losses ?? DEFAULT_NEED.systemLossesPct,
     batteryVoltageV: read.bank ?? DEFAULT_NEED.batteryVoltageV,
+    bankUsableWh: read.store !== undefined ? read.store * 1000 : DEFAULT_NEED.bankUsableWh,
+    batteryTempC: read.btemp ?? DEFAULT_NEED.batteryTempC,
+    maxDepthOfDischargePct: read.dod ?? DEFAULT_NEED.maxDepthOfDischargePct,
     arrayPowerW: read.array ?? DEFAULT_NEED.arrayPowerW,
     peakAcLoadW: read.peak ?? DEFAULT_NEED.peakAcLoadW,
     source: { kind: "typed" },

@@ -5,7 +5,7 @@ import Papa from "papaparse";
 import { isCurrencyCode } from "~/domain/money/money";
 import { canonicalDecimal, decimalProblem } from "~/domain/sourcing/decimal-text";
 import type { OfferPartKind } from "~/domain/sourcing/offer-facts";
-import { isIsoDate } from "~/domain/sourcing/offer-validity";
+import { isExpired, isIsoDate } from "~/domain/sourcing/offer-validity";
 import { MONEY_RULES } from "./sourcing-forms";
 
 export const MAX_OFFER_CSV_BYTES = 2 * 1024 * 1024;
@@ -45,14 +45,23 @@ const KIND_WORDS: Record<string, OfferPartKind> = {
 
 export const KIND_CSV_WORD: Record<OfferPartKind, string> = { modules: "module", batteries: "battery", controllers: "controller", inverters: "inverter" };
 
-export interface OfferCsvRow {
+/** The cells that name an offer (supplier and part) and its valid-until day: enough to look it up. */
+export interface OfferCsvIdentity {
   row: number;
   supplier: string;
   kind: OfferPartKind;
   maker: string;
   model: string;
-  sku: string;
+  /** Null when blank or not a three-letter code. */
   currency: string | null;
+  /** Null when blank or not a date. */
+  validUntil: string | null;
+  /** The valid-until day has passed: the import decides (only an offer already stored may stay expired). */
+  expired: boolean;
+}
+
+export interface OfferCsvRow extends OfferCsvIdentity {
+  sku: string;
   unitPrice: string;
   priceBreaks: { minQuantity: number; unitPrice: string }[];
   minimumOrder: number;
@@ -60,7 +69,6 @@ export interface OfferCsvRow {
   shippingPerOrder: string | null;
   leadTimeDays: number | null;
   stock: number | null;
-  validUntil: string | null;
   notes: string;
 }
 
@@ -76,6 +84,15 @@ export interface OfferCsvCheck {
   fileErrors: string[];
   problems: RowProblem[];
   rows: OfferCsvRow[];
+  /** Rows with cell problems whose supplier, kind, maker and model cells are sound: still looked up, so
+   * that a row's problems are listed all at once (a bad price and an unknown model). */
+  problemRows: OfferCsvIdentity[];
+}
+
+/** Puts a row's problems in the file's column order, wherever they were found. */
+export function byColumnOrder(errors: readonly { column: string; message: string }[]) {
+  const order = (column: string) => OFFER_CSV_COLUMNS.findIndex((c) => c.header === column);
+  return [...errors].sort((a, b) => order(a.column) - order(b.column));
 }
 
 function wholeNumber(text: string, label: string, min: number): { value?: number; problem?: string } {
@@ -108,8 +125,12 @@ function parseBreaks(text: string, problems: string[]) {
   return breaks.sort((a, b) => a.minQuantity - b.minQuantity);
 }
 
-/** Checks one record's cells on their own (part, supplier and duplicates are checked against the team's data later). */
-function checkRecord(cells: Record<OfferCsvHeader, string>, row: number, asOf: string): { value?: OfferCsvRow; problem?: RowProblem } {
+/** Checks one record's cells on their own (part, supplier, duplicates and expiry are judged against the team's data later). */
+function checkRecord(
+  cells: Record<OfferCsvHeader, string>,
+  row: number,
+  asOf: string,
+): { value?: OfferCsvRow; problem?: RowProblem; identity?: OfferCsvIdentity } {
   const errors: { column: string; message: string }[] = [];
   const add = (column: string, message: string) => errors.push({ column, message });
   for (const c of OFFER_CSV_COLUMNS) if (c.required && !cells[c.header]) add(c.header, `The ${c.header.replace(/_/g, " ")} is empty.`);
@@ -144,21 +165,27 @@ function checkRecord(cells: Record<OfferCsvHeader, string>, row: number, asOf: s
   let validUntil: string | null = null;
   if (cells.valid_until) {
     if (!isIsoDate(cells.valid_until)) add("valid_until", `"${cells.valid_until}" is not a date written YYYY-MM-DD.`);
-    else if (cells.valid_until < asOf)
-      add("valid_until", `The offer expired on ${cells.valid_until} (today is ${asOf}): ask the supplier for a current price, or leave the row out.`);
     else validUntil = cells.valid_until;
   }
   const label = `${cells.supplier || "?"} · ${cells.maker} ${cells.model}`.trim();
-  if (errors.length) return { problem: { row, label, errors } };
+  const identity =
+    kind && cells.supplier && cells.maker && cells.model
+      ? {
+          row,
+          supplier: cells.supplier,
+          kind,
+          maker: cells.maker,
+          model: cells.model,
+          currency: currency && isCurrencyCode(currency) ? currency : null,
+          validUntil,
+          expired: isExpired(validUntil, asOf),
+        }
+      : undefined;
+  if (errors.length) return { problem: { row, label, errors }, identity };
   return {
     value: {
-      row,
-      supplier: cells.supplier,
-      kind: kind!,
-      maker: cells.maker,
-      model: cells.model,
+      ...identity!,
       sku: cells.sku,
-      currency,
       unitPrice: canonicalDecimal(cells.unit_price),
       priceBreaks,
       minimumOrder: minimumOrder ?? 1,
@@ -166,7 +193,6 @@ function checkRecord(cells: Record<OfferCsvHeader, string>, row: number, asOf: s
       shippingPerOrder,
       leadTimeDays,
       stock,
-      validUntil,
       notes: cells.notes,
     },
   };
@@ -174,7 +200,7 @@ function checkRecord(cells: Record<OfferCsvHeader, string>, row: number, asOf: s
 
 /** Reads the file and checks every row's cells; `asOf` is the day expiry is judged on. */
 export function checkOfferCsv(text: string, asOf: string): OfferCsvCheck {
-  const check: OfferCsvCheck = { rowCount: 0, fileErrors: [], problems: [], rows: [] };
+  const check: OfferCsvCheck = { rowCount: 0, fileErrors: [], problems: [], rows: [], problemRows: [] };
   if (text.length > MAX_OFFER_CSV_BYTES) {
     check.fileErrors.push(`The file is larger than ${MAX_OFFER_CSV_BYTES / 1024 / 1024} MiB; split it into smaller files.`);
     return check;
@@ -208,9 +234,12 @@ export function checkOfferCsv(text: string, asOf: string): OfferCsvCheck {
       OfferCsvHeader,
       string
     >;
-    const { value, problem } = checkRecord(record, row, asOf);
-    if (problem) check.problems.push(problem);
-    else check.rows.push(value!);
+    const { value, problem, identity } = checkRecord(record, row, asOf);
+    if (value) check.rows.push(value);
+    else {
+      check.problems.push(problem!);
+      if (identity) check.problemRows.push(identity);
+    }
   }
   return check;
 }

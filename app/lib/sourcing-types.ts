@@ -29,6 +29,9 @@ export interface OfferImportReport {
   newSuppliers: { name: string; currency: string }[];
   newOffers: number;
   updatedOffers: number;
+  /** Expired rows that match an offer already stored (same supplier, part and valid-until day, as an
+   * export writes them): not written, the stored offer stays as it is. */
+  expiredKept: { row: number; label: string; validUntil: string }[];
   /** Not problems: things the team may want to fix after importing (a missing exchange rate). */
   warnings: string[];
 }

@@ -43,16 +43,20 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   if (planId && !plan) throw new Response("No such plan in your team.", { status: 404 });
   if (plan && !url.searchParams.has("filled")) {
     // Fill the comparison's fields from the plan once, then keep them in the address like typed ones.
-    const fromPlan = needFromPlan(plan.revision.result);
+    const fromPlan = needFromPlan(plan.revision.result, plan.revision.inputs.design);
     const next = new URLSearchParams(url.searchParams);
     const set = (key: string, value: number | null, digits = 2) => (value === null ? next.delete(key) : next.set(key, String(Number(value.toFixed(digits)))));
     set("energy", fromPlan.energy, 3);
     set("sun", fromPlan.sun);
     set("losses", fromPlan.losses, 1);
     set("bank", fromPlan.bank, 0);
+    set("store", fromPlan.store, 3);
+    set("btemp", fromPlan.batteryTempC, 1);
+    set("dod", fromPlan.dodLimitPct, 0);
     set("array", fromPlan.array, 0);
     set("peak", fromPlan.peak, 0);
-    set("qty", params.kind === "batteries" ? fromPlan.batteries : params.kind === "modules" ? null : 1, 0);
+    // Modules and batteries are counted per model from the need; one controller and one inverter.
+    set("qty", params.kind === "modules" || params.kind === "batteries" ? null : 1, 0);
     next.set("filled", "1");
     throw redirect(`${url.pathname}?${next}`);
   }
@@ -86,7 +90,18 @@ function NeedSummary({ kind, need }: { kind: OfferPartKind; need: Route.Componen
       </>
     );
   }
-  if (kind === "batteries") return <>{need.quantity} batteries of each offer.</>;
+  if (kind === "batteries") {
+    if (need.quantity !== null) return <>{need.quantity} batteries of each offer.</>;
+    return (
+      <>
+        Each battery is counted for a {need.batteryVoltageV} V bank that holds{" "}
+        <strong className="figures">{(need.bankUsableWh / 1000).toLocaleString("en-GB")} kWh</strong> usable at {need.batteryTempC} °C: enough in series for the
+        voltage, and strings in parallel for the energy at its own depth of discharge
+        {need.maxDepthOfDischargePct === null ? "" : ` (at most ${need.maxDepthOfDischargePct} %)`} and its capacity at that temperature — the kit plan's own
+        bank rule.
+      </>
+    );
+  }
   if (kind === "controllers")
     return (
       <>
@@ -177,7 +192,7 @@ export default function Compare({ loaderData }: Route.ComponentProps) {
             />
           ) : kind === "batteries" ? (
             <CompareTable
-              columns={batteryCompareColumns()}
+              columns={batteryCompareColumns(comparison.need.batteryVoltageV)}
               data={rows as BatteryComparisonRow[]}
               sort={sort}
               onSort={onSort}
@@ -224,8 +239,9 @@ function Footnotes({ kind }: { kind: OfferPartKind }) {
       ) : null}
       {kind === "batteries" ? (
         <li>
-          Usable kWh = nominal V × capacity Ah × usable depth of discharge. Price per cycled kWh = unit price ÷ (usable kWh × rated cycles): purchase price
-          only, before charging losses and ageing.
+          Usable kWh = nominal V × capacity Ah × usable depth of discharge. Bank: batteries in series = bank V ÷ the battery's voltage class; strings in
+          parallel = usable energy ÷ (depth of discharge × capacity left at the temperature) ÷ bank V ÷ Ah, rounded up. Price per cycled kWh = unit price ÷
+          (usable kWh × rated cycles): purchase price only, before charging losses and ageing.
         </li>
       ) : null}
       {kind === "controllers" ? (

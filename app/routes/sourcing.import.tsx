@@ -44,6 +44,8 @@ export async function action({ request }: Route.ActionArgs) {
   const { newOffers, updatedOffers, newSuppliers } = outcome.report;
   const parts = [`${newOffers} new offer${newOffers === 1 ? "" : "s"}`];
   if (updatedOffers) parts.push(`${updatedOffers} updated`);
+  const kept = outcome.report.expiredKept.length;
+  if (kept) parts.push(`${kept} expired offer${kept === 1 ? "" : "s"} left as ${kept === 1 ? "it was" : "they were"}`);
   if (newSuppliers.length) parts.push(`${newSuppliers.length} new supplier${newSuppliers.length === 1 ? "" : "s"}`);
   return redirectWithFlash("/sourcing", { kind: "success", message: `Imported from the CSV file: ${parts.join(", ")}.` });
 }
@@ -78,7 +80,8 @@ export default function SourcingImport({ actionData }: Route.ComponentProps) {
         <Panel title="Columns">
           <p className="mb-2 text-sm text-ink-soft">
             The first row names the columns (any order). Parts are matched to the catalogue by kind, maker and model. A row for a supplier and part you already
-            have replaces that offer's terms. Rows whose valid-until day has passed are refused.{" "}
+            have replaces that offer's terms. A row whose valid-until day has passed is refused, unless it is an offer you already have with the same
+            valid-until day (as your own export writes it): that offer is left as it is, so exporting and importing again changes nothing.{" "}
             <CsvTemplateLink csv={template()} fileName="kitwright-offers-template.csv" />, or export your offers from the overview and edit them.
           </p>
           <CsvColumnsList columns={OFFER_CSV_COLUMNS} />

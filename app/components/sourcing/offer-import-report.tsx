@@ -12,6 +12,7 @@ export function OfferImportReportPanel({ report, csvText, busy }: { report: Offe
     <Panel title="2 · What the check found">
       <p className="mb-3 text-sm" data-testid="import-summary">
         {report.rowCount} row{report.rowCount === 1 ? "" : "s"}: {report.readyCount} ready
+        {report.expiredKept.length ? `, ${report.expiredKept.length} expired offer${report.expiredKept.length === 1 ? "" : "s"} you already have` : ""}
         {report.problems.length ? `, ${report.problems.length} with problems` : ""}. Nothing has been written yet.
       </p>
       <CsvFileErrors errors={report.fileErrors} />
@@ -33,6 +34,16 @@ export function OfferImportReportPanel({ report, csvText, busy }: { report: Offe
           ) : null}
         </ul>
       ) : null}
+      {report.expiredKept.length ? (
+        <ul className="mb-3 space-y-1 text-sm text-ink-soft" data-testid="import-expired-kept">
+          {report.expiredKept.map((k) => (
+            <li key={k.row}>
+              <span aria-hidden="true">ℹ</span> Row {k.row} · {k.label}: expired on {k.validUntil}, the same as the offer you have. It stays as it is (kept,
+              flagged and left out of comparisons); nothing is written for this row.
+            </li>
+          ))}
+        </ul>
+      ) : null}
       {report.warnings.map((w) => (
         <p key={w} className="mb-2 text-sm text-warn">
           <span aria-hidden="true">⚠</span> {w}
@@ -48,6 +59,8 @@ export function OfferImportReportPanel({ report, csvText, busy }: { report: Offe
             {`Import ${report.readyCount} offer${report.readyCount === 1 ? "" : "s"}`}
           </SubmitButton>
         </Form>
+      ) : report.fileErrors.length === 0 && report.problems.length === 0 && report.expiredKept.length ? (
+        <p className="text-sm text-ink-soft">Nothing to write: every row is an expired offer you already have.</p>
       ) : (
         <p className="text-sm text-ink-soft">Correct the rows in your file and check it again. The import writes all rows or none.</p>
       )}

@@ -23,7 +23,24 @@ function Headroom({ pct, rating, need, unit, decimals = 0 }: { pct: number | nul
 const b = createColumnHelper<CompareFeatures, BatteryComparisonRow>();
 export const BATTERY_NUMERIC = new Set(["usableKWh", "cycleLife", "perUsableKWh", "perCycleKWh", "unitPrice", "landed", "leadTime"]);
 
-export function batteryCompareColumns(): CompareColumns<BatteryComparisonRow> {
+/** How many of the model make the bank, and how: "for 12: 12 in series × 1 string, 12.00 kWh usable". */
+function BankLine({ row, bankV }: { row: BatteryComparisonRow; bankV: number }) {
+  const bank = row.bank;
+  if (!bank) return null;
+  return (
+    <span className="block text-xs text-ink-soft" data-testid="bank-count">
+      for {bank.count}: {bank.batteriesInSeries} in series × {bank.stringsInParallel} string{bank.stringsInParallel === 1 ? "" : "s"},{" "}
+      {num(bank.bankUsableWh / 1000, 2)} kWh usable
+      {bank.seriesExact ? null : (
+        <span className="block text-fail">
+          <span aria-hidden="true">✕</span> {num(row.nominalVoltageV, 1)} V blocks do not make a {bankV} V bank
+        </span>
+      )}
+    </span>
+  );
+}
+
+export function batteryCompareColumns(bankV: number): CompareColumns<BatteryComparisonRow> {
   const shared = sharedColumns<BatteryComparisonRow>();
   return [
     shared.offer,
@@ -47,8 +64,9 @@ export function batteryCompareColumns(): CompareColumns<BatteryComparisonRow> {
         <span className="block whitespace-nowrap">
           <Unit value={info.getValue()} unit="kWh" decimals={2} />
           <span className="block text-xs text-ink-faint">
-            at {num(info.row.original.usableDodPct)} % depth; {num(info.row.original.usableKWhTotal, 2)} kWh in all
+            at {num(info.row.original.usableDodPct)} % depth{info.row.original.bank ? "" : `; ${num(info.row.original.usableKWhTotal, 2)} kWh in all`}
           </span>
+          <BankLine row={info.row.original} bankV={bankV} />
         </span>
       ),
     }),

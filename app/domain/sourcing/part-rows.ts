@@ -1,6 +1,8 @@
 // Comparison rows for batteries, charge controllers and inverters: the landed cost for the quantity
-// and the figures that decide between them.
+// and the figures that decide between them. Unless a quantity is typed, each battery model is landed
+// in the number that makes the bank asked for (so a 2 V cell and a 12 V block compare like for like).
 import { usableEnergyKWh } from "../catalogue/derived-figures";
+import { bankForModel, type BankForModel } from "./battery-need";
 import type { ComparisonNeed } from "./comparison-need";
 import { moneyText, offerCostRow, type MoneyText, type OfferCostRow } from "./comparison-rows";
 import { costOffer, type TeamPricing } from "./offer-costing";
@@ -13,6 +15,8 @@ function quantityOf(need: ComparisonNeed) {
 }
 
 export interface BatteryComparisonRow extends OfferCostRow {
+  /** How this model makes the bank asked for; null when a fixed quantity was typed. */
+  bank: BankForModel | null;
   chemistry: string;
   nominalVoltageV: number;
   capacityAh: number;
@@ -26,7 +30,16 @@ export interface BatteryComparisonRow extends OfferCostRow {
 }
 
 export function batteryRow(offer: OfferFacts, battery: BatteryFigures, need: ComparisonNeed, pricing: TeamPricing): BatteryComparisonRow {
-  const quantity = quantityOf(need);
+  const bank =
+    need.quantity === null
+      ? bankForModel(battery, {
+          bankVoltageV: need.batteryVoltageV,
+          usableWh: need.bankUsableWh,
+          batteryTempC: need.batteryTempC,
+          maxDepthOfDischargePct: need.maxDepthOfDischargePct,
+        })
+      : null;
+  const quantity = bank?.count ?? quantityOf(need);
   const costing = costOffer(offer.terms, quantity, pricing);
   const usableKWhPerUnit = usableEnergyKWh(battery.nominalVoltageV, battery.capacityAh, battery.usableDodPct);
   const unit = costing.unitPriceQuoting;
@@ -34,6 +47,7 @@ export function batteryRow(offer: OfferFacts, battery: BatteryFigures, need: Com
   const perCycle = unit ? pricePerCycleKWh(unit, usableKWhPerUnit, battery.cycleLife) : null;
   return {
     ...offerCostRow(offer, battery, costing, pricing.asOf),
+    bank,
     chemistry: battery.chemistry,
     nominalVoltageV: battery.nominalVoltageV,
     capacityAh: battery.capacityAh,

@@ -9,8 +9,15 @@ export interface PlanNeedValues {
   sun: number;
   /** The share of STC energy the plan's own module loses to temperature, controller and named losses, %. */
   losses: number;
+  /** The plan's own battery count (the comparison counts each model for the bank instead). */
   batteries: number;
   bank: number;
+  /** Usable energy the plan's bank must hold (heaviest month's daily load × autonomy days), kWh. */
+  store: number;
+  /** Battery temperature the plan's bank is sized at, °C. */
+  batteryTempC: number;
+  /** The plan's design limit on depth of discharge, %, when it sets one. */
+  dodLimitPct: number | null;
   array: number;
   peak: number | null;
 }
@@ -19,7 +26,7 @@ export interface PlanNeedValues {
  * The losses are those of the plan's own module at the site (energy per module ÷ (its STC power × sun
  * hours)); other modules are compared as if they lost the same share, which the page states.
  */
-export function needFromPlan(plan: KitPlan): PlanNeedValues {
+export function needFromPlan(plan: KitPlan, design: { maxDepthOfDischargePct?: number } = {}): PlanNeedValues {
   const designMonth = plan.array.designMonth ?? plan.moduleYield.worstMonth;
   const month = plan.array.months[designMonth - 1];
   const sun = plan.moduleYield.months[designMonth - 1].poaKWhM2Day;
@@ -31,6 +38,9 @@ export function needFromPlan(plan: KitPlan): PlanNeedValues {
     losses: lossesPct,
     batteries: plan.battery.batteryCount,
     bank: plan.systemVoltageV,
+    store: plan.battery.requiredUsableWh / 1000,
+    batteryTempC: plan.battery.batteryTempC,
+    dodLimitPct: design.maxDepthOfDischargePct ?? null,
     array: plan.array.layout.arrayStcPowerW,
     peak: plan.inverter ? plan.inverter.continuousNeededW : null,
   };

@@ -1,7 +1,9 @@
 // Importing offers from CSV. The check (dry run) reads every row, resolves suppliers and catalogue
 // parts, and reports each row's problems with its row number; it writes nothing. The import runs the
 // same check inside one transaction and writes every row (adding new suppliers, replacing the terms
-// of offers that already exist) or, when any row has a problem, nothing at all.
+// of offers that already exist) or, when any row has a problem, nothing at all. An expired row is a
+// problem, except when it is the team's own stored offer read back (same supplier, part and
+// valid-until day, as an export writes it): that offer is left as it is and the report says so.
 import { sql } from "kysely";
 import type { Executor } from "./executor.server";
 import { inTransaction, upsertOffer, type OfferValues } from "./offer-write.server";
@@ -11,7 +13,7 @@ import { convertMoney, MissingRateError } from "~/domain/money/currency-conversi
 import { money } from "~/domain/money/money";
 import type { OfferPartKind } from "~/domain/sourcing/offer-facts";
 import type { TeamPricing } from "~/domain/sourcing/offer-costing";
-import { checkOfferCsv, KIND_CSV_WORD, type OfferCsvRow, type RowProblem } from "~/lib/sourcing-csv";
+import { byColumnOrder, checkOfferCsv, KIND_CSV_WORD, type OfferCsvIdentity, type RowProblem } from "~/lib/sourcing-csv";
 import { loadTeamPricing } from "./settings.server";
 import type { OfferImportReport } from "~/lib/sourcing-types";
 
@@ -52,11 +54,15 @@ async function resolve(db: Executor, teamId: string, text: string, pricing: Team
     newSuppliers: [],
     newOffers: 0,
     updatedOffers: 0,
+    expiredKept: [],
     warnings: [],
   };
   const resolution: Resolution = { report, rows: [], supplierIds: new Map() };
   if (check.fileErrors.length) return resolution;
 
+  // Rows with cell problems are looked up too, so that each row's problems are listed at once.
+  const named: OfferCsvIdentity[] = [...check.rows, ...check.problemRows].sort((a, b) => a.row - b.row);
+  const cleanRows = new Map(check.rows.map((r) => [r.row, r]));
   const suppliers = await db
     .selectFrom("supplier")
     .select(["id", "name", "currency", "default_shipping_per_unit", "default_shipping_per_order", "default_lead_time_days"])
@@ -64,7 +70,7 @@ async function resolve(db: Executor, teamId: string, text: string, pricing: Team
     .execute();
   const existingSupplier = new Map(suppliers.map((s) => [key(s.name), s]));
   const newSupplierCurrency = new Map<string, { name: string; currency: string | null }>();
-  for (const r of check.rows) {
+  for (const r of named) {
     if (existingSupplier.has(key(r.supplier))) continue;
     const entry = newSupplierCurrency.get(key(r.supplier)) ?? { name: r.supplier, currency: null };
     entry.currency ??= r.currency;
@@ -72,26 +78,33 @@ async function resolve(db: Executor, teamId: string, text: string, pricing: Team
   }
 
   const parts = new Map<OfferPartKind, Map<string, string>>();
-  for (const kind of new Set(check.rows.map((r) => r.kind))) {
-    parts.set(kind, await partIndex(db, kind, [...new Set(check.rows.filter((r) => r.kind === kind).map((r) => r.maker.toLowerCase()))]));
+  for (const kind of new Set(named.map((r) => r.kind))) {
+    parts.set(kind, await partIndex(db, kind, [...new Set(named.filter((r) => r.kind === kind).map((r) => r.maker.toLowerCase()))]));
   }
-  const existingOffers = new Set(
-    (await db.selectFrom("offer").select(["supplier_id", "part_kind", "part_id"]).where("team_id", "=", teamId).execute()).map((o) =>
-      key(o.supplier_id, o.part_kind, o.part_id),
-    ),
+  // Supplier, part → the stored offer's valid-until day ("" when open-ended).
+  const existingOffers = new Map(
+    (
+      await db
+        .selectFrom("offer")
+        .select(["supplier_id", "part_kind", "part_id", sql<string | null>`valid_until::text`.as("valid_until")])
+        .where("team_id", "=", teamId)
+        .execute()
+    ).map((o) => [key(o.supplier_id, o.part_kind, o.part_id), o.valid_until ?? ""]),
   );
 
   const firstRowOf = new Map<string, number>();
-  const problems = new Map<number, RowProblem>();
-  const problem = (r: OfferCsvRow, column: string, message: string) => {
+  const problems = new Map<number, RowProblem>(check.problems.map((p) => [p.row, { ...p, errors: [...p.errors] }]));
+  const problem = (r: OfferCsvIdentity, column: string, message: string) => {
     const entry = problems.get(r.row) ?? { row: r.row, label: `${r.supplier} · ${r.maker} ${r.model}`, errors: [] };
     entry.errors.push({ column, message });
     problems.set(r.row, entry);
   };
-  for (const r of check.rows) {
+  for (const r of named) {
     const supplier = existingSupplier.get(key(r.supplier));
     const fresh = newSupplierCurrency.get(key(r.supplier));
-    if (!supplier && !fresh?.currency) problem(r, "currency", `"${r.supplier}" is a new supplier: give its currency on at least one of its rows.`);
+    const currencyFlagged = problems.get(r.row)?.errors.some((e) => e.column === "currency");
+    if (!supplier && !fresh?.currency && !currencyFlagged)
+      problem(r, "currency", `"${r.supplier}" is a new supplier: give its currency on at least one of its rows.`);
     const partId = parts.get(r.kind)?.get(key(r.maker, r.model));
     if (!partId)
       problem(r, "model", `No ${KIND_CSV_WORD[r.kind]} "${r.maker} ${r.model}" in the catalogue: check the spelling and the kind, or ask a curator to add it.`);
@@ -101,31 +114,42 @@ async function resolve(db: Executor, teamId: string, text: string, pricing: Team
       if (first !== undefined) problem(r, "model", `Row ${first} already has an offer from ${r.supplier} for this ${KIND_CSV_WORD[r.kind]}: keep one of them.`);
       else firstRowOf.set(identity, r.row);
     }
-    if (problems.has(r.row) || !partId) continue;
-    const currency = r.currency ?? supplier?.currency ?? fresh!.currency!;
+    // An expired row may only stand for the offer already stored with the same valid-until day (an
+    // exported file read back): it is left as it is. Any other expired row would bring in a stale price.
+    const stored = supplier && partId ? existingOffers.get(key(supplier.id, r.kind, partId)) : undefined;
+    const keepsStored = r.expired && stored === r.validUntil;
+    if (r.expired && !keepsStored)
+      problem(r, "valid_until", `The offer expired on ${r.validUntil} (today is ${pricing.asOf}): ask the supplier for a current price, or leave the row out.`);
+    const row = cleanRows.get(r.row);
+    if (problems.has(r.row) || !partId || !row) continue;
+    if (keepsStored) {
+      report.expiredKept.push({ row: r.row, label: `${r.supplier} · ${r.maker} ${r.model}`, validUntil: r.validUntil! });
+      continue;
+    }
+    const currency = row.currency ?? supplier?.currency ?? fresh!.currency!;
     resolution.rows.push({
       row: r.row,
       supplierName: supplier?.name ?? fresh!.name,
       values: {
-        partKind: r.kind,
+        partKind: row.kind,
         partId,
-        sku: r.sku,
+        sku: row.sku,
         currency,
-        unitPrice: r.unitPrice,
-        priceBreaks: r.priceBreaks,
-        minimumOrder: r.minimumOrder,
-        shippingPerUnit: r.shippingPerUnit ?? supplier?.default_shipping_per_unit ?? "0",
-        shippingPerOrder: r.shippingPerOrder ?? supplier?.default_shipping_per_order ?? "0",
-        leadTimeDays: r.leadTimeDays ?? supplier?.default_lead_time_days ?? null,
-        stock: r.stock,
-        validUntil: r.validUntil,
-        notes: r.notes,
+        unitPrice: row.unitPrice,
+        priceBreaks: row.priceBreaks,
+        minimumOrder: row.minimumOrder,
+        shippingPerUnit: row.shippingPerUnit ?? supplier?.default_shipping_per_unit ?? "0",
+        shippingPerOrder: row.shippingPerOrder ?? supplier?.default_shipping_per_order ?? "0",
+        leadTimeDays: row.leadTimeDays ?? supplier?.default_lead_time_days ?? null,
+        stock: row.stock,
+        validUntil: row.validUntil,
+        notes: row.notes,
       },
     });
-    if (supplier && existingOffers.has(key(supplier.id, r.kind, partId))) report.updatedOffers += 1;
+    if (stored !== undefined) report.updatedOffers += 1;
     else report.newOffers += 1;
   }
-  report.problems = [...report.problems, ...problems.values()].sort((a, b) => a.row - b.row);
+  report.problems = [...problems.values()].map((p) => ({ ...p, errors: byColumnOrder(p.errors) })).sort((a, b) => a.row - b.row);
   report.readyCount = resolution.rows.length;
   report.newSuppliers = [...newSupplierCurrency.values()].filter((s) => s.currency).map((s) => ({ name: s.name, currency: s.currency! }));
   for (const s of existingSupplier.values()) resolution.supplierIds.set(key(s.name), s.id);

@@ -38,7 +38,7 @@ describe("checking an offer CSV", () => {
       "A,module,M,Y,,EUR,12,50,,,,,,,,", // row 3: the comma split the price (one cell too many is ignored; price_breaks gets "50")
       "A,panel,M,Z,,EUR,abc,,,,,,,,", // row 4: unknown kind, bad price
       "", // row 5: blank, skipped
-      "A,battery,M,B,,EURO,10,1:9,0,,,,-3,2026-11-30,", // row 6: currency, break quantity, minimum order, stock, expired
+      "A,battery,M,B,,EURO,10,1:9,0,,,,-3,2026-11-30,", // row 6: currency, break quantity, minimum order, stock (and expired)
       "A,inverter,M,I,,EUR,10,,,,,,,2026-02-30,", // row 7: not a date
     ].join("\n");
     const check = checkOfferCsv(text, "2026-12-01");
@@ -57,8 +57,16 @@ describe("checking an offer CSV", () => {
     expect(byRow[6].join(" | ")).toMatch(/price_breaks: The break quantity must be at least 2/);
     expect(byRow[6].join(" | ")).toMatch(/minimum_order: The minimum order must be at least 1/);
     expect(byRow[6].join(" | ")).toMatch(/stock: The stock must be a whole number/);
-    expect(byRow[6].join(" | ")).toMatch(/valid_until: The offer expired on 2026-11-30 \(today is 2026-12-01\)/);
+    // Expiry is judged by the import against the team's stored offers, not here.
+    expect(byRow[6].join(" | ")).not.toMatch(/valid_until/);
     expect(byRow[7].join(" ")).toMatch(/valid_until: "2026-02-30" is not a date/);
+    // Rows whose supplier and part cells are sound are named, so the import can still look them up;
+    // row 4's kind is unknown, so it cannot be.
+    expect(check.problemRows.map((r) => [r.row, r.kind, r.model, r.currency, r.validUntil, r.expired])).toEqual([
+      [3, "modules", "Y", "EUR", null, false],
+      [6, "batteries", "B", null, "2026-11-30", true],
+      [7, "inverters", "I", "EUR", null, false],
+    ]);
   });
 
   it("refuses a file with missing or unknown columns before reading rows", () => {
@@ -70,8 +78,14 @@ describe("checking an offer CSV", () => {
     expect(checkOfferCsv(`${HEADER}\n`, "2026-12-01").fileErrors[0]).toMatch(/no offers/);
   });
 
-  it("keeps a price valid through its last day", () => {
-    expect(checkOfferCsv(`${HEADER}\nA,module,M,X,,EUR,1,,,,,,,2026-12-01,\n`, "2026-12-01").rows[0].validUntil).toBe("2026-12-01");
+  it("keeps a price valid through its last day, and flags it expired the day after", () => {
+    expect(checkOfferCsv(`${HEADER}\nA,module,M,X,,EUR,1,,,,,,,2026-12-01,\n`, "2026-12-01").rows[0]).toMatchObject({
+      validUntil: "2026-12-01",
+      expired: false,
+    });
+    const later = checkOfferCsv(`${HEADER}\nA,module,M,X,,EUR,1,,,,,,,2026-12-01,\n`, "2026-12-02");
+    expect(later.problems).toEqual([]);
+    expect(later.rows[0]).toMatchObject({ validUntil: "2026-12-01", expired: true });
   });
 });
 
