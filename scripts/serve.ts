@@ -2,6 +2,7 @@
 // line per request, then React Router's handler. Stateless: run as many as you like behind a load
 // balancer, all on one PostgreSQL (see README, "Running more than one instance").
 import { randomUUID } from "node:crypto";
+import { existsSync } from "node:fs";
 import path from "node:path";
 import { pathToFileURL } from "node:url";
 import { createRequestHandler } from "@react-router/express";
@@ -10,14 +11,26 @@ import express, { type NextFunction, type Request, type Response } from "express
 import type { ServerBuild } from "react-router";
 import { withDatabaseOutageAs503 } from "../app/server/database-outage.server";
 import { withRequestLimits } from "../app/server/request-limits.server";
+import { InvalidEnvironment } from "../app/server/env-schema";
 import { clientIpHeader, refuseCrossOriginWrites, trustProxySetting } from "./lib/request-guards";
 import { securityHeaders } from "./lib/security-headers";
+import { parseServerEnv, type ServerEnv } from "./lib/server-env";
 
-const port = Number(process.env.PORT ?? 3000);
-const host = process.env.HOST ?? "127.0.0.1";
-const logLevel = process.env.LOG_LEVEL ?? "info"; // "info": every request; "warn": 4xx and 5xx only; "error": 5xx only
-const buildPath = path.resolve(process.env.SERVER_BUILD ?? "build/server/index.js");
-const publicUrl = process.env.PUBLIC_URL ?? "http://127.0.0.1:3000";
+let settings: ServerEnv;
+try {
+  settings = parseServerEnv(process.env);
+} catch (error) {
+  if (!(error instanceof InvalidEnvironment)) throw error;
+  console.error(`Kitwright cannot start. ${error.message}\nEvery variable and its default: .env.example.`);
+  process.exit(1);
+}
+const { PORT: port, HOST: host, PUBLIC_URL: publicUrl } = settings;
+const logLevel = settings.LOG_LEVEL; // "info": every request; "warn": 4xx and 5xx only; "error": 5xx only
+const buildPath = path.resolve(settings.SERVER_BUILD);
+if (!existsSync(buildPath)) {
+  console.error(`Kitwright cannot start: no production build at ${buildPath}. Run \`npm run build\` first (or set SERVER_BUILD).`);
+  process.exit(1);
+}
 
 function log(fields: Record<string, unknown>) {
   process.stdout.write(`${JSON.stringify({ time: new Date().toISOString(), ...fields })}\n`);
@@ -44,7 +57,7 @@ function requestLog(req: Request, res: Response, next: NextFunction) {
 const build = withRequestLimits(withDatabaseOutageAs503((await import(pathToFileURL(buildPath).href)) as ServerBuild));
 const app = express();
 app.disable("x-powered-by");
-app.set("trust proxy", trustProxySetting(process.env.TRUST_PROXY));
+app.set("trust proxy", trustProxySetting(String(settings.TRUST_PROXY)));
 app.use(requestLog);
 app.use(securityHeaders);
 app.use(clientIpHeader);

@@ -1,10 +1,12 @@
 // npm test — everything, from a clean machine: Vitest (unit + integration against a PostgreSQL
 // cluster of its own), then the production build: its server tests (two instances, a database
 // outage) and the browser tests (Debian's Chromium, installed when absent) with the fakes running.
-// Exits non-zero on any failure.
+// Exits non-zero on any failure. The build goes to build-test/ (KITWRIGHT_BUILD_DIR), never to the
+// build/ that a running `npm start` serves; every process started from here inherits the setting.
 //   --no-e2e     unit and integration only
 //   --e2e-only   production-server and browser tests only
 //   --browser-only   browser tests only (no production-server project)
+//   --production-only   production-server tests only (no browser tests)
 //   other words  file filters for the production-server and browser projects, e.g. `quote-deposit`
 import { spawnSync } from "node:child_process";
 import { existsSync } from "node:fs";
@@ -15,9 +17,11 @@ import { appEnv, startAppServer, startFakes } from "./lib/services";
 
 const args = new Set(process.argv.slice(2));
 const filters = [...args].filter((a) => !a.startsWith("--"));
-const runVitest = !args.has("--e2e-only") && !args.has("--browser-only");
+const runVitest = !args.has("--e2e-only") && !args.has("--browser-only") && !args.has("--production-only");
 const runE2e = !args.has("--no-e2e");
 const runProduction = !args.has("--browser-only");
+const runBrowser = !args.has("--production-only");
+process.env.KITWRIGHT_BUILD_DIR ||= "build-test";
 
 function step(title: string) {
   console.log(`\n━━ ${title}`);
@@ -49,14 +53,15 @@ async function waitForFreePorts() {
 }
 
 async function browserTests(): Promise<boolean> {
-  ensureChromium();
+  if (runBrowser) ensureChromium();
   await waitForFreePorts();
-  step("Building the app");
+  step(`Building the app into ${process.env.KITWRIGHT_BUILD_DIR}/`);
   if (!run("node_modules/.bin/react-router", ["build"])) return false;
   // Two production servers on a throwaway PostgreSQL of their own (free ports): sessions and limits
   // shared, cross-site writes refused, a database outage answered with 503 and recovered from.
   step("Production server tests (two instances, database outage)");
   const productionOk = runProduction ? run("node_modules/.bin/vitest", ["run", "--project", "production", "--passWithNoTests", ...filters]) : true;
+  if (!runBrowser) return productionOk;
   const binDir = findPostgresBinDir();
   ensureCluster(TEST_CLUSTER, binDir);
   const startedHere = startCluster(TEST_CLUSTER, binDir);

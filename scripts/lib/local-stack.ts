@@ -1,12 +1,14 @@
 // The local stack shared by `npm start` and `npm run dev`: a lock against a second copy, the project's
-// own PostgreSQL, migrations, demo data on an empty database, and the fakes. Ctrl-C stops it all.
-import { existsSync, readFileSync, rmSync, writeFileSync } from "node:fs";
+// own PostgreSQL, migrations, demo data on an empty database, and the fakes. Ctrl-C, SIGTERM, SIGHUP
+// (the terminal closed) or the end of the process that started it stops it all.
 import { DEV_CLUSTER, DEV_DATABASE, DEV_DATABASE_URL } from "./dev-cluster";
 import { migrateToLatest } from "./migrator";
-import { ensureCluster, ensureDatabase, findPostgresBinDir, startCluster, stopCluster } from "./postgres-cluster";
-import { isPortInUse, stopAll } from "./processes";
+import { watchLaunchers } from "./parent-watch";
+import { ensureCluster, ensureDatabase, findPostgresBinDir, isClusterRunning, startCluster, stopCluster } from "./postgres-cluster";
+import { stopAll } from "./processes";
 import { appEnv, startFakes, type ServicePorts } from "./services";
 import { seedIfEmpty } from "./seed-demo";
+import { busyPorts, busyPortsMessage, otherStarts, removeLock, runningStart, writeLock } from "./start-lock";
 
 export const LOCAL_PORTS: ServicePorts = {
   app: Number(process.env.PORT ?? 3000),
@@ -15,51 +17,47 @@ export const LOCAL_PORTS: ServicePorts = {
   payments: Number(process.env.PAYMENTS_PORT ?? 12111),
 };
 
-function runningPid(lockFile: string): number | null {
-  if (!existsSync(lockFile)) return null;
-  const pid = Number(readFileSync(lockFile, "utf8"));
-  try {
-    process.kill(pid, 0);
-    return pid;
-  } catch {
-    return null;
-  }
-}
-
 export async function bootLocalStack(ports: ServicePorts = LOCAL_PORTS) {
-  const lockFile = `/var/tmp/kitwright-start-${ports.app}.pid`;
-  const pid = runningPid(lockFile);
-  if (pid) {
+  const running = runningStart(ports.app);
+  if (running) {
     console.error(
-      `Kitwright is already running (process ${pid}) at http://127.0.0.1:${ports.app}. Stop it with Ctrl-C in its terminal, or choose another PORT.`,
+      `Kitwright is already running (process ${running.pid}) at http://127.0.0.1:${ports.app}. Stop it with Ctrl-C in its terminal. ` +
+        "To run a second copy, give it its own PORT, MAIL_SMTP_PORT, MAIL_HTTP_PORT, PAYMENTS_PORT, KITWRIGHT_PG_PORT and KITWRIGHT_PGDATA (see .env.example).",
     );
     process.exit(1);
   }
-  for (const [name, port] of Object.entries(ports)) {
-    if (await isPortInUse(port)) {
-      console.error(
-        `Port ${port} (${name}) is already in use: is another Kitwright or another program running? Stop it or set another port (see .env.example).`,
-      );
-      process.exit(1);
-    }
-  }
-  writeFileSync(lockFile, String(process.pid));
-
   const binDir = findPostgresBinDir();
+  const others = otherStarts();
+  const busy = await busyPorts(ports, DEV_CLUSTER.port, others, () => isClusterRunning(DEV_CLUSTER, binDir));
+  if (busy.length) {
+    console.error(busyPortsMessage(busy, others));
+    process.exit(1);
+  }
+  writeLock(ports, DEV_CLUSTER.port);
+
   ensureCluster(DEV_CLUSTER, binDir);
   let startedPostgres = false;
   let stopping = false;
-  function shutdown(code = 0) {
+  function shutdown(code = 0, why = "") {
     if (stopping) return;
     stopping = true;
-    console.log("\nStopping Kitwright…");
-    stopAll();
-    if (startedPostgres) stopCluster(DEV_CLUSTER, binDir);
-    rmSync(lockFile, { force: true });
-    process.exit(code);
+    // After SIGHUP the terminal may be gone: a failed write must not stop the clean-up.
+    for (const stream of [process.stdout, process.stderr]) stream.on("error", () => {});
+    try {
+      console.log(`\nStopping Kitwright${why ? ` (${why})` : ""}…`);
+    } catch {}
+    try {
+      stopAll();
+      if (startedPostgres) stopCluster(DEV_CLUSTER, binDir);
+    } finally {
+      removeLock(ports.app);
+      process.exit(code);
+    }
   }
   process.on("SIGINT", () => shutdown(0));
-  process.on("SIGTERM", () => shutdown(0));
+  process.on("SIGTERM", () => shutdown(0, "SIGTERM"));
+  process.on("SIGHUP", () => shutdown(0, "SIGHUP: the terminal closed"));
+  watchLaunchers((why) => shutdown(0, why));
 
   try {
     startedPostgres = startCluster(DEV_CLUSTER, binDir);

@@ -1,5 +1,6 @@
 // Starts the local fakes and the production server as child processes with one shared set of ports.
 import { existsSync } from "node:fs";
+import { serverBuildPath } from "./build-dir";
 import { startProcess, waitForHttp } from "./processes";
 
 export interface ServicePorts {
@@ -39,7 +40,8 @@ export async function startFakes(env: NodeJS.ProcessEnv, ports: ServicePorts) {
 }
 
 export async function startAppServer(env: NodeJS.ProcessEnv, ports: ServicePorts) {
-  if (!existsSync("build/server/index.js")) throw new Error("No production build: run `npm run build` first.");
+  const buildPath = serverBuildPath({ ...process.env, ...env });
+  if (!existsSync(buildPath)) throw new Error(`No production build at ${buildPath}: run \`npm run build\` first.`);
   const server = startProcess("app", process.execPath, ["--enable-source-maps", "--import", "tsx", "scripts/serve.ts"], env);
   await waitForHttp(`http://127.0.0.1:${ports.app}/healthz`, 30000);
   return server;

@@ -6,6 +6,7 @@ import * as team from "~/routes/team";
 import * as teamApiKeys from "~/routes/team-api-keys";
 import * as invitation from "~/routes/invitation";
 import * as signUp from "~/routes/sign-up";
+import * as sites from "~/routes/sites";
 import { db } from "~/server/db.server";
 
 describe("roles", () => {
@@ -78,6 +79,56 @@ describe("teams and invitations", () => {
     expect(result.status).toBe(403);
     const members = await db.selectFrom("member").select("userId").where("organizationId", "=", owner.teamId).execute();
     expect(members.map((m) => m.userId)).not.toContain(stranger.userId);
+  });
+
+  it("lets the owner remove a member, who then loses the team's pages", async () => {
+    const owner = await installerWithTeam("remover");
+    const mate = await signUpUser("removed-mate");
+    await owner.client.action(team, "/team", { intent: "invite", email: mate.email });
+    const inv = await db.selectFrom("invitation").select("id").where("organizationId", "=", owner.teamId).executeTakeFirstOrThrow();
+    expect((await mate.client.action(invitation, `/invitations/${inv.id}`, {}, { invitationId: inv.id })).status).toBe(302);
+    expect((await mate.client.loader(sites, "/sites")).status).toBe(200);
+    const member = await db
+      .selectFrom("member")
+      .select("id")
+      .where("organizationId", "=", owner.teamId)
+      .where("userId", "=", mate.userId)
+      .executeTakeFirstOrThrow();
+
+    const removed = await owner.client.action(team, "/team", { intent: "remove-member", memberId: member.id });
+    expect(removed.status, JSON.stringify(removed.data)).toBe(302);
+    expect(await db.selectFrom("member").select("id").where("id", "=", member.id).executeTakeFirst()).toBeUndefined();
+    const ownerView = await owner.client.loader(team, "/team");
+    expect(ownerView.data.members.map((m: { email: string }) => m.email)).toEqual([owner.email]);
+    // The former member has no team any more: team pages send them to start one of their own.
+    for (const [mod, path] of [
+      [team, "/team"],
+      [sites, "/sites"],
+    ] as const) {
+      const page = await mate.client.loader(mod, path);
+      expect(page.status, path).toBe(302);
+      expect(page.location, path).toBe("/team/new");
+    }
+  });
+
+  it("lets the owner withdraw a pending invitation, whose link then refuses", async () => {
+    const owner = await installerWithTeam("withdrawer");
+    const inviteeEmail = `withdrawn-${Date.now()}@test.example`;
+    await owner.client.action(team, "/team", { intent: "invite", email: inviteeEmail });
+    const link = firstLink((await latestMailTo(inviteeEmail)).text, "/invitations/");
+    const invitationId = link.pathname.split("/").pop()!;
+
+    const cancel = await owner.client.action(team, "/team", { intent: "cancel-invitation", invitationId });
+    expect(cancel.status, JSON.stringify(cancel.data)).toBe(302);
+    expect((await owner.client.loader(team, "/team")).data.invitations).toHaveLength(0);
+
+    const invitee = new RouteClient();
+    expect((await invitee.loader(invitation, link.pathname, { invitationId })).data.open).toBe(false);
+    await invitee.action(signUp, "/sign-up", { name: "Too Late", email: inviteeEmail, password: PASSWORD, redirectTo: link.pathname });
+    const accept = await invitee.action(invitation, link.pathname, {}, { invitationId });
+    expect(accept.status).toBe(410);
+    const members = await db.selectFrom("member").select("userId").where("organizationId", "=", owner.teamId).execute();
+    expect(members).toHaveLength(1);
   });
 
   it("never shows or changes one team's data to another team's installer", async () => {

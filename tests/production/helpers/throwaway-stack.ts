@@ -7,6 +7,7 @@ import { randomBytes } from "node:crypto";
 import { existsSync, rmSync } from "node:fs";
 import net from "node:net";
 import { ensureCluster, ensureDatabase, findPostgresBinDir, startCluster, stopCluster, type ClusterOptions } from "../../../scripts/lib/postgres-cluster";
+import { serverBuildPath } from "../../../scripts/lib/build-dir";
 import { waitForHttp } from "../../../scripts/lib/processes";
 
 export const PUBLIC_HOST = "app.kitwright.test";
@@ -37,7 +38,8 @@ export interface StackOptions {
 }
 
 export async function startThrowawayStack(instanceCount: number, options: StackOptions = {}) {
-  if (!existsSync("build/server/index.js")) throw new Error("No production build: run `npm run build` first (npm test builds before this project).");
+  if (!existsSync(serverBuildPath()))
+    throw new Error(`No production build at ${serverBuildPath()}: run \`npm run build\` first (npm test builds before this).`);
   const binDir = findPostgresBinDir();
   const pgPort = await freePort();
   const cluster: ClusterOptions = { port: pgPort, dataDir: `/var/tmp/kitwright-pg-outage-${pgPort}` };
