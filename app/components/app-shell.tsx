@@ -1,5 +1,5 @@
-import { Form, Link, NavLink } from "react-router";
-import type { ReactNode } from "react";
+import { Form, Link, NavLink, useLocation } from "react-router";
+import { useEffect, useRef, type ReactNode } from "react";
 import { BrandMark } from "./brand-mark";
 import { navFor } from "~/lib/nav";
 import type { Role } from "~/lib/roles";
@@ -12,7 +12,7 @@ export interface ShellUser {
 }
 
 function navClass({ isActive }: { isActive: boolean }) {
-  return `rounded-md px-3 py-2 text-sm font-medium ${isActive ? "bg-ink text-paper" : "text-ink-soft hover:bg-paper-deep hover:text-ink"}`;
+  return `whitespace-nowrap rounded-md px-3 py-2 text-sm font-medium ${isActive ? "bg-ink text-paper" : "text-ink-soft hover:bg-paper-deep hover:text-ink"}`;
 }
 
 function NavLinks({ user }: { user: ShellUser | null }) {
@@ -27,18 +27,19 @@ function NavLinks({ user }: { user: ShellUser | null }) {
   );
 }
 
-function Account({ user }: { user: ShellUser }) {
+// In the header the name and team are capped so that a long one cannot push "Sign out" off the
+// line; in the phone menu they stack above the button and wrap instead.
+function Account({ user, stacked = false }: { user: ShellUser; stacked?: boolean }) {
+  const role = user.teamName ? `${user.role} · ${user.teamName}` : user.role;
+  const line = stacked ? "block" : "block truncate";
   return (
-    <div className="flex items-center gap-3 text-sm">
-      <span className="text-right leading-tight">
-        <span className="block font-medium">{user.name}</span>
-        <span className="block text-xs text-ink-faint">
-          {user.role}
-          {user.teamName ? ` · ${user.teamName}` : ""}
-        </span>
+    <div className={stacked ? "flex flex-col items-start gap-2 text-sm" : "flex items-center gap-3 text-sm"}>
+      <span className={stacked ? "leading-tight" : "max-w-52 min-w-0 text-right leading-tight"} title={stacked ? undefined : `${user.name} · ${role}`}>
+        <span className={`${line} font-medium`}>{user.name}</span>
+        <span className={`${line} text-xs text-ink-faint`}>{role}</span>
       </span>
       <Form method="post" action="/sign-out">
-        <button type="submit" className="rounded-md border border-rule px-3 py-1.5 hover:bg-paper-deep">
+        <button type="submit" className="rounded-md border border-rule px-3 py-1.5 whitespace-nowrap hover:bg-paper-deep">
           Sign out
         </button>
       </Form>
@@ -55,17 +56,11 @@ export function AppShell({ user, devOutbox, children }: { user: ShellUser | null
             <BrandMark size={30} />
             <span className="text-lg">Kitwright</span>
           </Link>
-          <nav aria-label="Main" className="hidden flex-1 gap-1 md:flex">
+          <nav aria-label="Main" className="hidden flex-1 gap-1 xl:flex">
             <NavLinks user={user} />
           </nav>
-          <div className="ml-auto hidden md:block">{user ? <Account user={user} /> : <SignedOutLinks />}</div>
-          <details className="relative ml-auto md:hidden">
-            <summary className="cursor-pointer list-none rounded-md border border-rule px-3 py-1.5 text-sm">Menu ☰</summary>
-            <div className="absolute right-0 z-20 mt-2 flex w-64 flex-col gap-1 rounded-lg border border-rule bg-sheet p-3 shadow-lg">
-              <NavLinks user={user} />
-              <div className="mt-2 border-t border-rule pt-2">{user ? <Account user={user} /> : <SignedOutLinks />}</div>
-            </div>
-          </details>
+          <div className="ml-auto hidden xl:block">{user ? <Account user={user} /> : <SignedOutLinks />}</div>
+          <PhoneMenu user={user} />
         </div>
       </header>
       <main className="mx-auto w-full max-w-6xl flex-1 px-4 py-6">{children}</main>
@@ -81,6 +76,27 @@ export function AppShell({ user, devOutbox, children }: { user: ShellUser | null
         ) : null}
       </footer>
     </div>
+  );
+}
+
+// The collapsed menu below the width where the full navigation fits on one line. A <details> keeps
+// itself open through a client-side navigation, so it is closed whenever the location changes.
+function PhoneMenu({ user }: { user: ShellUser | null }) {
+  const menu = useRef<HTMLDetailsElement>(null);
+  const location = useLocation();
+  useEffect(() => {
+    if (menu.current) menu.current.open = false;
+  }, [location.key]);
+  return (
+    <details ref={menu} className="relative ml-auto xl:hidden">
+      <summary className="cursor-pointer list-none rounded-md border border-rule px-3 py-1.5 text-sm">Menu ☰</summary>
+      <div className="absolute right-0 z-20 mt-2 flex w-64 max-w-[calc(100vw-2rem)] flex-col gap-1 rounded-lg border border-rule bg-sheet p-3 shadow-lg">
+        <nav aria-label="Main" className="flex flex-col gap-1">
+          <NavLinks user={user} />
+        </nav>
+        <div className="mt-2 border-t border-rule pt-2">{user ? <Account user={user} stacked /> : <SignedOutLinks />}</div>
+      </div>
+    </details>
   );
 }
 

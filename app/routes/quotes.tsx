@@ -51,7 +51,7 @@ export default function Quotes({ loaderData, actionData }: Route.ComponentProps)
   return (
     <>
       <PageHeader title="Quotes" lead="Priced from a kit plan and your suppliers' offers; sent to the customer, who approves and pays the deposit by card." />
-      <div className="grid gap-6">
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-6">
         <Panel title="New quote">
           {plans.length === 0 ? (
             <p className="text-ink-soft">
@@ -106,7 +106,7 @@ export default function Quotes({ loaderData, actionData }: Route.ComponentProps)
           </Form>
           {quotes.length === 0 ? <p className="text-ink-soft">No quotes match.</p> : null}
           {quotes.length > 0 ? (
-            <div className="overflow-x-auto">
+            <div className="relative min-w-0 overflow-x-auto">
               <table className="w-full text-sm">
                 <thead>
                   <tr className="border-b border-rule text-left text-ink-soft">

@@ -73,7 +73,7 @@ export default function YieldPage({ loaderData }: Route.ComponentProps) {
         title="Site yield"
         lead="Energy one module delivers to the battery each month at a site, from the monthly climate, the array's tilt and facing, cell temperature, the controller and named losses."
       />
-      <div className="grid gap-6 lg:grid-cols-[minmax(0,26rem)_1fr]">
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[minmax(0,26rem)_minmax(0,1fr)]">
         <div className="space-y-6">
           <Panel title="Site">
             <SiteInputs state={state} errors={errors} update={update} />

@@ -45,8 +45,10 @@ export function DataTable<T extends { id: string } & Record<string, any>>({
     getRowId: (row) => row.id,
   });
 
+  // relative: the hidden (sr-only) sort words are absolutely positioned; without a positioned box here
+  // they escape this scroll box and widen the whole page on a phone.
   return (
-    <div className={`overflow-x-auto transition-opacity ${pending ? "opacity-60" : ""}`} aria-busy={pending}>
+    <div className={`relative min-w-0 overflow-x-auto transition-opacity ${pending ? "opacity-60" : ""}`} aria-busy={pending}>
       <table className="figures w-full text-left text-sm">
         <caption className="sr-only">{caption}</caption>
         <thead className="border-b-2 border-ink/70 text-xs text-ink-soft">

@@ -72,7 +72,7 @@ export function QuoteEditor({
       </Panel>
       <Panel title="Lines">
         <FieldError id={fields.lines.errorId} errors={fields.lines.errors} />
-        <div className="overflow-x-auto">
+        <div className="relative min-w-0 overflow-x-auto">
           <table className="w-full min-w-[44rem] text-sm">
             <thead>
               <tr className="text-left text-ink-soft">

@@ -116,7 +116,7 @@ export function SiteFormView({
             <label htmlFor={fields.clearnessPreset.id} className="mb-1 block text-sm font-medium">
               Sky preset
             </label>
-            <select {...getSelectProps(fields.clearnessPreset)} className="rounded-md border border-rule bg-sheet px-3 py-2">
+            <select {...getSelectProps(fields.clearnessPreset)} className="max-w-full rounded-md border border-rule bg-sheet px-3 py-2">
               <option value="">Choose…</option>
               {Object.entries(CLEARNESS_PRESETS).map(([key, p]) => (
                 <option key={key} value={key}>

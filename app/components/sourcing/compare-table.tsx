@@ -63,8 +63,9 @@ export function CompareTable<T extends { offerId: string } & Record<string, any>
     sortDescFirst: false,
     getRowId: (row) => row.offerId,
   });
+  // relative: keeps the absolutely positioned hidden (sr-only) words inside this scroll box.
   return (
-    <div className="overflow-x-auto">
+    <div className="relative min-w-0 overflow-x-auto">
       <table className="figures w-full text-left text-sm" data-testid="compare-table">
         <caption className="sr-only">{caption}</caption>
         <thead className="border-b-2 border-ink/70 text-xs uppercase tracking-wide text-ink-soft">
