@@ -36,7 +36,10 @@ export async function loader({ request, params }: Route.LoaderArgs) {
   const { team, plan, revision, history } = await loadPlan(request, params.planId, wanted);
   const isLatest = revision.revision === plan.latest_revision;
   const current = isLatest ? await planFromChoices(team.teamId, revision.choices) : null;
-  const changes = current?.ok ? [...describeInputChanges(revision.inputs, current.input), ...describeResultChanges(revision.result, current.plan)] : [];
+  const inputChanges = current?.ok ? describeInputChanges(revision.inputs, current.input) : [];
+  const changes = current?.ok ? [...inputChanges, ...describeResultChanges(revision.result, current.plan)] : [];
+  // Results that differ from the same inputs come from a change in how Kitwright works a plan out.
+  const changedBy = !changes.length ? null : inputChanges.length ? "data" : "method";
   return {
     name: plan.name,
     planId: plan.id,
@@ -53,6 +56,7 @@ export async function loader({ request, params }: Route.LoaderArgs) {
     sources: current?.ok ? current.sources : null,
     currentProblem: current && !current.ok ? current.message : null,
     changes,
+    changedBy,
     history,
     editor: isLatest ? { initial: editorStateFrom(revision.choices), options: await editorOptions(team.teamId, plan.site_id) } : null,
   };
@@ -147,7 +151,11 @@ export default function PlanPage({ loaderData, actionData }: Route.ComponentProp
       ) : null}
       {l.changes.length ? (
         <div className="mb-4 rounded-lg border border-warn bg-warn-wash p-4 text-sm" role="status">
-          <p className="font-semibold">⚠ Since this revision was saved, the data behind it changed:</p>
+          <p className="font-semibold">
+            {l.changedBy === "data"
+              ? "⚠ Since this revision was saved, the data behind it changed:"
+              : "⚠ Since this revision was saved, Kitwright works plans out more carefully, and the same inputs now give:"}
+          </p>
           <ul className="mt-1 list-disc pl-5">
             {l.changes.map((c) => (
               <li key={c}>{c}</li>

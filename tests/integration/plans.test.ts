@@ -82,6 +82,30 @@ describe("kit plans", () => {
     expect(old.data.revision.result).toEqual(before);
   });
 
+  it("tells a change in the data from a change in how plans are worked out", async () => {
+    const a = await installerWithTeam("plan-method");
+    const setup = await planningSetup(a.teamId);
+    const saved = await a.client.action(plansNew, "/plans/new", { choices: JSON.stringify(choices(setup)) });
+    const planId = saved.location!.split("/").pop()!;
+    expect((await a.client.loader(plan, `/plans/${planId}`, { planId })).data.changedBy).toBeNull();
+    // The stored result as an older version of the planner might have left it: same inputs, one day more unmet.
+    const revision = await db.selectFrom("kit_plan_revision").select(["id", "result"]).where("plan_id", "=", planId).executeTakeFirstOrThrow();
+    const older = structuredClone(revision.result) as KitPlan;
+    older.simulation.unmetDays += 1;
+    await db
+      .updateTable("kit_plan_revision")
+      .set({ result: JSON.stringify(older) })
+      .where("id", "=", revision.id)
+      .execute();
+    const byMethod = await a.client.loader(plan, `/plans/${planId}`, { planId });
+    expect(byMethod.data.changedBy).toBe("method");
+    expect(byMethod.data.changes.join(" ")).toMatch(/Days with unmet load a year: \d+ → \d+/);
+
+    await db.updateTable("pv_module").set({ verified_pmax_w: 280.5, verified_reading_count: 5 }).where("id", "=", setup.moduleId).execute();
+    const byData = await a.client.loader(plan, `/plans/${planId}`, { planId });
+    expect(byData.data.changedBy).toBe("data");
+  });
+
   it("accepts a failing safety check only with a reason, and never a passing one", async () => {
     const a = await installerWithTeam("plan-override");
     const setup = await planningSetup(a.teamId);
