@@ -9,6 +9,7 @@ import * as plan_ from "~/routes/plan";
 import * as plansApi from "~/routes/api.v1.plans";
 import * as planApi from "~/routes/api.v1.plan";
 import * as previewApi from "~/routes/api.v1.plans-preview";
+import * as quotes from "~/routes/quotes";
 import { db } from "~/server/db.server";
 import type { KitPlan } from "~/domain/sizing/plan-types";
 
@@ -120,6 +121,12 @@ describe("kit plans", () => {
     const row = await db.selectFrom("kit_plan_revision").select("failing_safety_checks").where("plan_id", "=", planId).executeTakeFirstOrThrow();
     expect(row.failing_safety_checks).toBe(failing.length);
 
+    // While a safety check fails with no accepted reason, no quote can be drafted from the plan.
+    const blocked = await a.client.action(quotes, "/quotes", { planId });
+    expect(blocked.status).toBe(409);
+    expect(blocked.data.message).toMatch(/cold morning|Voc|voltage/i);
+    expect(await db.selectFrom("quote").select("id").where("plan_id", "=", planId).execute()).toEqual([]);
+
     expect((await a.client.action(plan, `/plans/${planId}`, { intent: "override", checkId: "array.voc-cold", reason: "ok" }, { planId })).status).toBe(400);
     const passing = result.checks.find((c) => c.status === "pass")!;
     expect(
@@ -134,6 +141,20 @@ describe("kit plans", () => {
     expect(ok.status).toBe(302);
     const overrides = (await a.client.loader(plan, `/plans/${planId}`, { planId })).data.revision.overrides;
     expect(overrides).toEqual([expect.objectContaining({ checkId: "array.voc-cold", byName: "Test plan-override" })]);
+    // Once every failing safety check is accepted with a reason, the plan can become a quote.
+    const stillFailing = failing.filter((c) => c.id !== "array.voc-cold");
+    for (const check of stillFailing) {
+      const accepted = await a.client.action(
+        plan,
+        `/plans/${planId}`,
+        { intent: "override", checkId: check.id, reason: "Accepted by the engineer after a site visit." },
+        { planId },
+      );
+      expect(accepted.status).toBe(302);
+    }
+    const drafted = await a.client.action(quotes, "/quotes", { planId });
+    expect(drafted.status, JSON.stringify(drafted.data)).toBe(302);
+    expect(await db.selectFrom("quote").select("id").where("plan_id", "=", planId).execute()).toHaveLength(1);
 
     // A layout of 3 in series turns the failing check green in a new revision.
     const fixed = await a.client.action(
