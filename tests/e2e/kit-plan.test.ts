@@ -100,8 +100,16 @@ it("plans a kit for the mountain hut and fixes a failing check by changing the s
   await page.getByRole("button", { name: "Save plan" }).click();
   await page.getByText(/saved as revision 1/).waitFor();
   await page.getByRole("heading", { name: "Energy and load, month by month" }).waitFor();
-  // Both charts drew their data (recharts renders SVG paths after hydration).
-  expect(await page.locator(".recharts-surface").count()).toBeGreaterThanOrEqual(2);
+  // Both charts drew their data (recharts renders SVG after hydration): twelve monthly bars and a load
+  // line through twelve points, and a state-of-charge area whose outline runs through the year.
+  const energy = page.getByRole("img", { name: /array's energy a day against the load/ });
+  await energy.locator(".recharts-bar-rectangle path").first().waitFor();
+  expect(await energy.locator(".recharts-bar-rectangle path").count()).toBe(12);
+  expect(await energy.locator(".recharts-line-dot").count()).toBeGreaterThanOrEqual(12);
+  const soc = page.getByRole("img", { name: /state of charge through a simulated year/ });
+  const outline = await soc.locator(".recharts-area-curve").first().getAttribute("d");
+  // One path command per plotted day at least (the chart may thin the 365 days, never to a handful).
+  expect((outline ?? "").match(/[LC]/g)?.length ?? 0).toBeGreaterThan(50);
   await coldMorningCheckIs(page, "pass");
   expect(await page.getByText("The design must follow the local electrical code").count()).toBeGreaterThan(0);
   await snap(page, "plan-saved");
