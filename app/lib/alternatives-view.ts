@@ -1,12 +1,17 @@
 // Kit alternatives as the page and the API show them: totals as exact decimal texts in the quoting
 // currency (from integer minor units), never JavaScript floats.
 import Decimal from "decimal.js";
-import { minorDigits } from "~/domain/money/money";
+import { formatMoney, minorDigits, money } from "~/domain/money/money";
 import type { AlternativesResult, ChosenPart, CurrentKitCost } from "~/domain/sourcing/alternatives/types";
 
 export function minorToText(minor: number, currency: string): string {
   const digits = minorDigits(currency);
   return new Decimal(minor).div(new Decimal(10).pow(digits)).toFixed(digits);
+}
+
+/** For people, as every money figure is shown: "EUR 1,234.50". */
+export function minorForPeople(minor: number, currency: string): string {
+  return formatMoney(money(minorToText(minor, currency), currency));
 }
 
 function partJson(p: ChosenPart, currency: string) {
@@ -18,14 +23,14 @@ export function currentKitSentence(current: CurrentKitCost, currency: string): s
   const meets = current.meetsPlan === false ? " It does not itself meet every check and the unmet-days target of this plan." : "";
   if (current.totalMinor === null) return `Your current kit cannot be costed: ${current.problems.join("; ")}.${meets}`;
   const counts = `${current.moduleCount} modules, ${current.batteryCount} ${current.batteryCount === 1 ? "battery" : "batteries"}`;
-  return `Your current kit: ${minorToText(current.totalMinor, currency)} ${currency} at the team's cheapest offers (${counts}).${meets}`;
+  return `Your current kit: ${minorForPeople(current.totalMinor, currency)} at the team's cheapest offers (${counts}).${meets}`;
 }
 
 /** What a kit saves or costs more than the current kit; null when the current kit cannot be costed. */
 export function againstCurrent(totalMinor: number, current: CurrentKitCost, currency: string) {
   if (current.totalMinor === null) return null;
   const diff = totalMinor - current.totalMinor;
-  const amount = `${minorToText(Math.abs(diff), currency)} ${currency}`;
+  const amount = minorForPeople(Math.abs(diff), currency);
   return { difference: minorToText(diff, currency), words: diff < 0 ? `saves ${amount}` : diff > 0 ? `costs ${amount} more` : "same cost" };
 }
 

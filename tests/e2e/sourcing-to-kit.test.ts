@@ -11,7 +11,7 @@ const PRICE_LIST = fileURLToPath(new URL("../../data/demo/kestrel-row-price-list
 const SUPPLIER = "Kestrel Row Wholesale";
 const PLAN = "Station kit, 24 V AGM";
 
-/** "8 × Maker Model (Supplier, 123.45 EUR landed)" → count and part name, from one part line of a kit row. */
+/** "8 × Maker Model (Supplier, EUR 1,123.45 landed)" → count and part name, from one part line of a kit row. */
 async function partOf(line: Locator) {
   const text = (await line.textContent()) ?? "";
   const match = /(\d+) × (.+?) \(/.exec(text);
@@ -71,9 +71,9 @@ it("imports the demo price list, then applies the cheapest kit that meets a plan
 
     // Cheapest first: every total is at least the one above it (totals are exact two-digit decimals).
     const totals = (await rows.getByTestId("total-landed").allTextContents()).map((t) => {
-      const match = /^\s*(\d+\.\d{2}) EUR\s*$/.exec(t);
+      const match = /^\s*EUR ([\d,]+)\.(\d{2})\s*$/.exec(t);
       if (!match) throw new Error(`Not a total in EUR: "${t}"`);
-      return Math.round(Number(match[1]) * 100);
+      return Number(match[1].replaceAll(",", "")) * 100 + Number(match[2]);
     });
     expect(totals).toHaveLength(count);
     for (let i = 1; i < totals.length; i++) expect(totals[i], `row ${i + 1} after row ${i}`).toBeGreaterThanOrEqual(totals[i - 1]);

@@ -2,6 +2,7 @@
 // current kit, cost per delivered kWh, the parts with their counts and offers, what differs from the
 // plan, and a button to use the kit.
 import { Form } from "react-router";
+import { formatMoney, money } from "~/domain/money/money";
 import type { alternativesJson } from "~/lib/alternatives-view";
 
 type View = NonNullable<ReturnType<typeof alternativesJson>>;
@@ -12,7 +13,7 @@ function PartLine({ label, part, currency }: { label: string; part: Row["module"
     <li data-testid={`part-${label.toLowerCase()}`}>
       <span className="text-ink-faint">{label}:</span> {part.quantity} × {part.label}{" "}
       <span className="text-ink-faint">
-        ({part.supplierName}, <span className="figures">{part.landedCost}</span> {currency} landed)
+        ({part.supplierName}, <span className="figures">{formatMoney(money(part.landedCost, currency))}</span> landed)
       </span>
     </li>
   );
@@ -39,7 +40,7 @@ export function AlternativesTable({ view, pending }: { view: View; pending: bool
             <tr key={a.rank} className="border-b border-rule align-top" data-testid="alternative-row">
               <td className="py-3 pr-3 figures">{a.rank}</td>
               <td className="py-3 pr-3 figures font-semibold whitespace-nowrap" data-testid="total-landed">
-                {a.totalLandedCost} {c}
+                {formatMoney(money(a.totalLandedCost, c))}
               </td>
               <td className="py-3 pr-3 figures whitespace-nowrap" data-testid="against-current">
                 {a.againstCurrentKit ? (

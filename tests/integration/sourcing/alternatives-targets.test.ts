@@ -11,6 +11,12 @@ import * as plansNew from "~/routes/plans-new";
 import * as alternativesPage from "~/routes/plan-alternatives";
 import * as alternativesApi from "~/routes/api.v1.plans.$planId.alternatives";
 
+/** "EUR 1,234.50", grouped by hand (en-GB), as every money figure is shown to people. */
+function eur(amount: Decimal) {
+  const [whole, fraction] = amount.toFixed(2).split(".");
+  return `EUR ${whole.replace(/\B(?=(\d{3})+$)/g, ",")}.${fraction}`;
+}
+
 type Alt = { totalLandedCost: string; module: { id: string; quantity: number }; againstCurrentKit: { difference: string; words: string } | null };
 
 describe("kit alternatives and the plan's targets", () => {
@@ -58,15 +64,13 @@ describe("kit alternatives and the plan's targets", () => {
     const current = body.currentKit.landedCost as string;
     expect(current).toMatch(/^\d+\.\d{2}$/);
     expect(body.currentKit.sentence).toBe(
-      `Your current kit: ${current} EUR at the team's cheapest offers (${result.array.layout.moduleCount} modules, ${result.battery.batteryCount} ${result.battery.batteryCount === 1 ? "battery" : "batteries"}).` +
+      `Your current kit: ${eur(new Decimal(current))} at the team's cheapest offers (${result.array.layout.moduleCount} modules, ${result.battery.batteryCount} ${result.battery.batteryCount === 1 ? "battery" : "batteries"}).` +
         (body.currentKit.meetsPlan ? "" : " It does not itself meet every check and the unmet-days target of this plan."),
     );
     for (const alt of body.alternatives as Alt[]) {
       const diff = new Decimal(alt.totalLandedCost).minus(current);
       expect(alt.againstCurrentKit?.difference).toBe(diff.toFixed(2));
-      expect(alt.againstCurrentKit?.words).toBe(
-        diff.isNegative() ? `saves ${diff.abs().toFixed(2)} EUR` : diff.isZero() ? "same cost" : `costs ${diff.toFixed(2)} EUR more`,
-      );
+      expect(alt.againstCurrentKit?.words).toBe(diff.isNegative() ? `saves ${eur(diff.abs())}` : diff.isZero() ? "same cost" : `costs ${eur(diff)} more`);
     }
 
     // The page says the same, under a title that is true whether the kits are cheaper or dearer.

@@ -16,12 +16,12 @@ describe("the current kit's landed total", () => {
     // Total 492.00 + 210.00 + 2 210.00 + 320.00 = 3 232.00 EUR.
     const result = searchAlternatives(smallCatalogueInput({ currentLabels: labels }));
     expect(result.current).toEqual({ totalMinor: 323200, moduleCount: 6, batteryCount: 6, meetsPlan: true, problems: [] });
-    expect(currentKitSentence(result.current, "EUR")).toBe("Your current kit: 3232.00 EUR at the team's cheapest offers (6 modules, 6 batteries).");
+    expect(currentKitSentence(result.current, "EUR")).toBe("Your current kit: EUR 3,232.00 at the team's cheapest offers (6 modules, 6 batteries).");
     const view = alternativesJson({ planId: "p", revision: 1, result, offerCount: 12, ratesUsed: [], searchMs: 1 })!;
     expect(view.currentKit.landedCost).toBe("3232.00");
     // The cheapest alternative is 2 972.00 EUR (alternatives.test.ts): it saves 260.00 EUR.
     expect(view.alternatives[0].totalLandedCost).toBe("2972.00");
-    expect(view.alternatives[0].againstCurrentKit).toEqual({ difference: "-260.00", words: "saves 260.00 EUR" });
+    expect(view.alternatives[0].againstCurrentKit).toEqual({ difference: "-260.00", words: "saves EUR 260.00" });
   });
 
   it("says which part has no valid offer, or no price in the quoting currency", () => {
@@ -37,14 +37,14 @@ describe("the current kit's landed total", () => {
 
   it("words a dearer or equal kit as such", () => {
     const current = { totalMinor: 323200, moduleCount: 6, batteryCount: 6, meetsPlan: true, problems: [] };
-    expect(againstCurrent(330000, current, "EUR")).toEqual({ difference: "68.00", words: "costs 68.00 EUR more" });
+    expect(againstCurrent(330000, current, "EUR")).toEqual({ difference: "68.00", words: "costs EUR 68.00 more" });
     expect(againstCurrent(323200, current, "EUR")).toEqual({ difference: "0.00", words: "same cost" });
   });
 
   it("says when the current kit itself misses the plan's unmet-days target", () => {
     const current = { totalMinor: 179200, moduleCount: 6, batteryCount: 2, meetsPlan: false, problems: [] };
     expect(currentKitSentence(current, "EUR")).toBe(
-      "Your current kit: 1792.00 EUR at the team's cheapest offers (6 modules, 2 batteries). It does not itself meet every check and the unmet-days target of this plan.",
+      "Your current kit: EUR 1,792.00 at the team's cheapest offers (6 modules, 2 batteries). It does not itself meet every check and the unmet-days target of this plan.",
     );
   });
 });
