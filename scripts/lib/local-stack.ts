@@ -8,7 +8,7 @@ import { ensureCluster, ensureDatabase, findPostgresBinDir, isClusterRunning, st
 import { stopAll } from "./processes";
 import { appEnv, startFakes, type ServicePorts } from "./services";
 import { seedIfEmpty } from "./seed-demo";
-import { busyPorts, busyPortsMessage, otherStarts, removeLock, runningStart, writeLock } from "./start-lock";
+import { busyPorts, busyPortsMessage, otherStarts, removeLock, runningStart, claimLock } from "./start-lock";
 
 export const LOCAL_PORTS: ServicePorts = {
   app: Number(process.env.PORT ?? 3000),
@@ -18,14 +18,15 @@ export const LOCAL_PORTS: ServicePorts = {
 };
 
 export async function bootLocalStack(ports: ServicePorts = LOCAL_PORTS) {
-  const running = runningStart(ports.app);
-  if (running) {
+  function refuseSecondCopy(running: { pid: number }): never {
     console.error(
       `Kitwright is already running (process ${running.pid}) at http://127.0.0.1:${ports.app}. Stop it with Ctrl-C in its terminal. ` +
         "To run a second copy, give it its own PORT, MAIL_SMTP_PORT, MAIL_HTTP_PORT, PAYMENTS_PORT, KITWRIGHT_PG_PORT and KITWRIGHT_PGDATA (see .env.example).",
     );
     process.exit(1);
   }
+  const running = runningStart(ports.app);
+  if (running) refuseSecondCopy(running);
   const binDir = findPostgresBinDir();
   const others = otherStarts();
   const busy = await busyPorts(ports, DEV_CLUSTER.port, others, () => isClusterRunning(DEV_CLUSTER, binDir));
@@ -33,7 +34,8 @@ export async function bootLocalStack(ports: ServicePorts = LOCAL_PORTS) {
     console.error(busyPortsMessage(busy, others));
     process.exit(1);
   }
-  writeLock(ports, DEV_CLUSTER.port);
+  const holder = claimLock(ports, DEV_CLUSTER.port);
+  if (holder) refuseSecondCopy(holder);
 
   ensureCluster(DEV_CLUSTER, binDir);
   let startedPostgres = false;

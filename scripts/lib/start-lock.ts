@@ -62,8 +62,26 @@ export function otherStarts(): LockInfo[] {
     .filter((info): info is LockInfo => info !== null && info.pid !== process.pid);
 }
 
-export function writeLock(ports: ServicePorts, pgPort: number) {
-  writeFileSync(lockFileFor(ports.app), JSON.stringify({ pid: process.pid, app: ports.app, pgPort } satisfies LockInfo));
+/**
+ * Takes the lock for this app port, or returns the copy that holds it. The file is created exclusively
+ * ("wx"), so of two starts racing for the port only one wins; a lock left by a process that no longer
+ * runs is replaced.
+ */
+export function claimLock(ports: ServicePorts, pgPort: number): LockInfo | null {
+  const file = lockFileFor(ports.app);
+  const text = JSON.stringify({ pid: process.pid, app: ports.app, pgPort } satisfies LockInfo);
+  for (let attempt = 0; attempt < 3; attempt++) {
+    try {
+      writeFileSync(file, text, { flag: "wx" });
+      return null;
+    } catch (error) {
+      if ((error as NodeJS.ErrnoException).code !== "EEXIST") throw error;
+      const holder = readLock(file);
+      if (holder) return holder;
+      rmSync(file, { force: true }); // stale: its process has ended
+    }
+  }
+  throw new Error(`Could not take the start lock ${file}.`);
 }
 
 export function removeLock(appPort: number) {
