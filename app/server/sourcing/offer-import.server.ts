@@ -4,6 +4,7 @@
 // of offers that already exist) or, when any row has a problem, nothing at all. An expired row is a
 // problem, except when it is the team's own stored offer read back (same supplier, part and
 // valid-until day, as an export writes it): that offer is left as it is and the report says so.
+import Decimal from "decimal.js";
 import { sql } from "kysely";
 import type { Executor } from "./executor.server";
 import { inTransaction, upsertOffer, type OfferValues } from "./offer-write.server";
@@ -81,15 +82,15 @@ async function resolve(db: Executor, teamId: string, text: string, pricing: Team
   for (const kind of new Set(named.map((r) => r.kind))) {
     parts.set(kind, await partIndex(db, kind, [...new Set(named.filter((r) => r.kind === kind).map((r) => r.maker.toLowerCase()))]));
   }
-  // Supplier, part → the stored offer's valid-until day ("" when open-ended).
+  // Supplier, part → the stored offer's valid-until day ("" when open-ended) and its price.
   const existingOffers = new Map(
     (
       await db
         .selectFrom("offer")
-        .select(["supplier_id", "part_kind", "part_id", sql<string | null>`valid_until::text`.as("valid_until")])
+        .select(["supplier_id", "part_kind", "part_id", "unit_price", "currency", sql<string | null>`valid_until::text`.as("valid_until")])
         .where("team_id", "=", teamId)
         .execute()
-    ).map((o) => [key(o.supplier_id, o.part_kind, o.part_id), o.valid_until ?? ""]),
+    ).map((o) => [key(o.supplier_id, o.part_kind, o.part_id), { validUntil: o.valid_until ?? "", unitPrice: o.unit_price, currency: o.currency }]),
   );
 
   const firstRowOf = new Map<string, number>();
@@ -117,10 +118,20 @@ async function resolve(db: Executor, teamId: string, text: string, pricing: Team
     // An expired row may only stand for the offer already stored with the same valid-until day (an
     // exported file read back): it is left as it is. Any other expired row would bring in a stale price.
     const stored = supplier && partId ? existingOffers.get(key(supplier.id, r.kind, partId)) : undefined;
-    const keepsStored = r.expired && stored === r.validUntil;
-    if (r.expired && !keepsStored)
-      problem(r, "valid_until", `The offer expired on ${r.validUntil} (today is ${pricing.asOf}): ask the supplier for a current price, or leave the row out.`);
     const row = cleanRows.get(r.row);
+    const sameDay = r.expired && stored?.validUntil === r.validUntil;
+    // An edited price on an expired row is a stale price coming in, not the stored offer read back.
+    const priceEdited =
+      sameDay && row !== undefined && (!new Decimal(row.unitPrice).equals(stored!.unitPrice) || (row.currency ?? supplier!.currency) !== stored!.currency);
+    const keepsStored = sameDay && !priceEdited;
+    if (priceEdited)
+      problem(
+        r,
+        "unit_price",
+        `This row changes the price of an offer that expired on ${r.validUntil}: ask the supplier for a current price and date, or leave the row as exported.`,
+      );
+    else if (r.expired && !keepsStored)
+      problem(r, "valid_until", `The offer expired on ${r.validUntil} (today is ${pricing.asOf}): ask the supplier for a current price, or leave the row out.`);
     if (problems.has(r.row) || !partId || !row) continue;
     if (keepsStored) {
       report.expiredKept.push({ row: r.row, label: `${r.supplier} · ${r.maker} ${r.model}`, validUntil: r.validUntil! });

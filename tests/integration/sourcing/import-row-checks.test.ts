@@ -71,6 +71,34 @@ describe("importing a team's own export with an expired offer", () => {
     }
   });
 
+  it("refuses an exported expired row whose price was edited, and writes nothing", async () => {
+    const a = await teamWithOffers("rt-edited-expired");
+    const before = await storedOffers(a.teamId);
+    const exported = (await a.client.loader(exportRoute, "/sourcing/export")).data as string;
+    const lines = exported.trim().split("\n");
+    const batteryLine = lines.findIndex((line) => line.includes("LFP-100"));
+    expect(lines[batteryLine]).toContain(",415.00,");
+    lines[batteryLine] = lines[batteryLine].replace(",415.00,", ",399.00,");
+    const check = await a.client.action(importRoute, "/sourcing/import", { intent: "check", csvText: lines.join("\n") });
+    const problems = check.data.report.problems as { row: number; errors: { column: string; message: string }[] }[];
+    expect(problems).toEqual([
+      {
+        row: batteryLine + 1,
+        label: `Kestrel Row · ${a.maker} LFP-100`,
+        errors: [
+          {
+            column: "unit_price",
+            message:
+              "This row changes the price of an offer that expired on 2020-01-31: ask the supplier for a current price and date, or leave the row as exported.",
+          },
+        ],
+      },
+    ]);
+    expect(check.data.report.expiredKept).toEqual([]);
+    expect((await a.client.action(importRoute, "/sourcing/import", { intent: "import", csvText: lines.join("\n") })).status).toBe(400);
+    expect(await storedOffers(a.teamId)).toEqual(before);
+  });
+
   it("still refuses an expired price that is not the stored offer, and writes nothing", async () => {
     const a = await teamWithOffers("rt-new-expired");
     const before = await storedOffers(a.teamId);
