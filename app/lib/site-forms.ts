@@ -47,6 +47,12 @@ export const siteFormSchema = z
     coldestTempC: num("coldest temperature")
       .min(-60, "The coldest temperature must be at least −60 °C.")
       .max(40, "The coldest temperature must be at most 40 °C."),
+    // Optional: blank leaves the hot-afternoon check on the hottest month's mean daily maximum.
+    hottestTempC: z
+      .number({ error: "The hottest temperature must be a number." })
+      .min(-40, "The hottest temperature must be at least −40 °C.")
+      .max(60, "The hottest temperature must be at most 60 °C.")
+      .optional(),
     irradianceSource: z.enum(["measured", "clearness-preset"], "Choose where the irradiation comes from."),
     clearnessPreset: z.enum(Object.keys(CLEARNESS_PRESETS) as [ClearnessPreset, ...ClearnessPreset[]]).optional(),
     months: z.array(monthSchema).length(12, "Give all 12 months."),
@@ -73,6 +79,15 @@ export const siteFormSchema = z
       const minima = months.map((m) => m?.tMinC).filter((t): t is number => typeof t === "number");
       if (typeof site.coldestTempC === "number" && minima.length && site.coldestTempC > Math.min(...minima)) {
         add(["coldestTempC"], "The coldest temperature cannot be above a month's mean minimum.");
+      }
+      if (typeof site.hottestTempC === "number" && typeof site.coldestTempC === "number" && site.hottestTempC <= site.coldestTempC) {
+        add(["hottestTempC"], "The hottest temperature must be above the coldest.");
+      }
+      // A design high below a month's own mean maximum would make the hot-afternoon check less cautious
+      // than leaving it blank: the mirror of the coldest rule.
+      const maxima = months.map((m) => m?.tMaxC).filter((t): t is number => typeof t === "number");
+      if (typeof site.hottestTempC === "number" && maxima.length && site.hottestTempC < Math.max(...maxima)) {
+        add(["hottestTempC"], "The hottest temperature cannot be below a month's mean maximum.");
       }
       const climate = siteSchema.safeParse(toEngineSite(site));
       if (!climate.success) for (const issue of climate.error.issues) add(issue.path as (string | number)[], issue.message);

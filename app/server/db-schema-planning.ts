@@ -31,6 +31,8 @@ export interface SiteTable {
   albedo: number;
   shading_derate_pct: Generated<number>;
   coldest_temp_c: number;
+  /** The hottest afternoon designed for, °C; null: the hottest month's mean daily maximum stands in. */
+  hottest_temp_c: number | null;
   irradiance_source: "measured" | "clearness-preset";
   clearness_preset: string | null;
   months: Json<SiteMonthJson[]>;

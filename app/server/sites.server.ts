@@ -18,6 +18,8 @@ function columns(form: SiteForm) {
     albedo: form.albedo,
     shading_derate_pct: form.shadingDeratePct,
     coldest_temp_c: form.coldestTempC,
+    // Blank in an edit clears it: the check goes back to the hottest month's mean daily maximum.
+    hottest_temp_c: form.hottestTempC ?? null,
     irradiance_source: form.irradianceSource,
     clearness_preset: form.irradianceSource === "clearness-preset" ? (form.clearnessPreset ?? null) : null,
     months: JSON.stringify(form.months),
@@ -74,6 +76,7 @@ export function siteToForm(site: NonNullable<Awaited<ReturnType<typeof findSite>
     albedo: site.albedo,
     shadingDeratePct: site.shading_derate_pct,
     coldestTempC: site.coldest_temp_c,
+    hottestTempC: site.hottest_temp_c ?? undefined,
     irradianceSource: site.irradiance_source,
     clearnessPreset: (site.clearness_preset ?? undefined) as SiteForm["clearnessPreset"],
     months: site.months as SiteForm["months"],

@@ -70,7 +70,12 @@ export function demoAlternativesInput(siteIndex: number, copies = 1): Alternativ
   const demo = DEMO_SITES[siteIndex];
   const d = DEFAULT_DESIGN;
   const base: KitPlanInput = {
-    site: { ...toEngineSite(demo.site), coldestTempC: demo.site.coldestTempC, shadingDeratePct: demo.site.shadingDeratePct },
+    site: {
+      ...toEngineSite(demo.site),
+      coldestTempC: demo.site.coldestTempC,
+      ...(demo.site.hottestTempC !== undefined ? { hottestTempC: demo.site.hottestTempC } : {}),
+      shadingDeratePct: demo.site.shadingDeratePct,
+    },
     appliances: demo.loadSheet.appliances,
     systemVoltageV: demo.plan.systemVoltageV,
     parts: null as never, // not used by the search: the candidates bring their parts

@@ -82,6 +82,11 @@ export function SiteFormView({
             <TextField field={fields.albedo} label="Ground albedo (0–1)" />
             <TextField field={fields.shadingDeratePct} label="Shading derate (%)" />
             <TextField field={fields.coldestTempC} label="Coldest expected air (°C)" hint="Sets the cold-morning string voltage." />
+            <TextField
+              field={fields.hottestTempC}
+              label="Hottest expected air (°C, optional)"
+              hint="The hottest afternoon you design for (blank: the hottest month's mean daily maximum). Hot modules give less voltage."
+            />
           </div>
           <p className="mt-2 text-xs text-ink-faint">{tiltHint(fields.latitudeDeg.value)}</p>
         </Panel>

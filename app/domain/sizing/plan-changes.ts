@@ -42,10 +42,14 @@ export function describeInputChanges(saved: KitPlanInput, current: KitPlanInput)
   if (differs(saved.parts.inverter, current.parts.inverter)) changes.push("The inverter's catalogue figures changed.");
   if (saved.site.coldestTempC !== current.site.coldestTempC)
     changes.push(`Coldest expected temperature: ${saved.site.coldestTempC} °C → ${current.site.coldestTempC} °C.`);
+  // Plans saved before sites had a design high carry none: a value set since is the installer's choice,
+  // and it moves the hot-afternoon check, so it is named like any other change.
+  const [sh, ch] = [saved.site.hottestTempC ?? null, current.site.hottestTempC ?? null];
+  if (sh !== ch) changes.push(`Hottest expected temperature: ${sh === null ? "none" : `${sh} °C`} → ${ch === null ? "none" : `${ch} °C`}.`);
   const monthChanges = saved.site.months.map((m, i) => (differs(m, current.site.months[i]) ? MONTHS[i] : null)).filter(Boolean);
   if (monthChanges.length) changes.push(`Site climate changed in ${monthChanges.join(", ")}.`);
-  const { months: _g, coldestTempC: _h, ...siteRest } = saved.site;
-  const { months: _i, coldestTempC: _j, ...currentSiteRest } = current.site;
+  const { months: _g, coldestTempC: _h, hottestTempC: _k, ...siteRest } = saved.site;
+  const { months: _i, coldestTempC: _j, hottestTempC: _l, ...currentSiteRest } = current.site;
   if (differs(siteRest, currentSiteRest)) changes.push("The site's place, orientation, albedo or shading changed.");
   if (differs(saved.appliances, current.appliances)) changes.push("The load sheet changed.");
   return changes;

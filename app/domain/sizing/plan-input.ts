@@ -31,6 +31,7 @@ export function planInputIssues(input: KitPlanInput): PlanInputIssue[] {
   const { site, parts, design } = input;
   if (site.months?.length !== 12) issues.push({ path: "site.months", message: "Give exactly 12 months, January to December." });
   within(issues, "site.coldestTempC", site.coldestTempC, -70, 40, "The coldest expected temperature (°C)");
+  if (site.hottestTempC !== undefined) within(issues, "site.hottestTempC", site.hottestTempC, -40, 60, "The hottest expected temperature (°C)");
   if (site.shadingDeratePct !== undefined) within(issues, "site.shadingDeratePct", site.shadingDeratePct, 0, 90, "Shading loss (%)");
   if (!SYSTEM_VOLTAGES.includes(input.systemVoltageV)) issues.push({ path: "systemVoltageV", message: "System voltage must be 12, 24 or 48 V." });
   input.appliances.forEach((appliance, index) => {

@@ -22,7 +22,9 @@ export function planAssumptions(site: PlanSite, design: DesignChoices, controlle
     notes.push(`Shade: the site's shading loss of ${fmt(site.shadingDeratePct, 0)} % is taken off the unshaded figures above in every month.`);
   notes.push(`String voltage on the coldest morning at ${fmt(site.coldestTempC, 0)} °C air (cells taken at air temperature at first light).`);
   notes.push(
-    `String voltage on a hot afternoon: cells at ${fmt(hottestAirC, 0)} °C air plus the NOCT rise at 1000 W/m²` +
+    `String voltage on a hot afternoon: cells at ${fmt(hottestAirC, 0)} °C air ` +
+      (site.hottestTempC !== undefined ? "(the site's hottest expected temperature)" : "(the hottest month's mean daily maximum)") +
+      " plus the NOCT rise at 1000 W/m²" +
       (controller.kind === "mppt" ? `; the tracker needs ${fmt(design.mpptHeadroomV ?? DEFAULT_MPPT_HEADROOM_V, 1)} V above the charging voltage.` : "."),
   );
   notes.push(batteryTempNote);

@@ -33,7 +33,13 @@ export async function buildPlanInput(teamId: string, choices: PlanChoices): Prom
   const form = siteToForm(site);
   const d = choices.design;
   const input: KitPlanInput = {
-    site: { ...toEngineSite(form), coldestTempC: form.coldestTempC, shadingDeratePct: form.shadingDeratePct },
+    site: {
+      ...toEngineSite(form),
+      coldestTempC: form.coldestTempC,
+      // Only when set: a snapshot without it plans on the hottest month's mean daily maximum, as before.
+      ...(form.hottestTempC !== undefined ? { hottestTempC: form.hottestTempC } : {}),
+      shadingDeratePct: form.shadingDeratePct,
+    },
     appliances: sheet.appliances,
     systemVoltageV: choices.systemVoltageV,
     parts: { module: module.part, controller: controller.part, battery: battery.part, inverter: inverter?.part ?? null },

@@ -33,6 +33,20 @@ describe("what changed since a plan was saved", () => {
     expect(changes).toMatch(/load sheet changed/);
   });
 
+  it("names a hottest expected temperature set since the plan was saved, changed or cleared, and nothing else", () => {
+    // A snapshot from before sites had a design high has no hottestTempC; the site's new value is the installer's choice.
+    const saved = base();
+    const current = base();
+    current.site = { ...current.site, hottestTempC: 38 };
+    expect(describeInputChanges(saved, current)).toEqual(["Hottest expected temperature: none → 38 °C."]);
+    const hotter = base();
+    hotter.site = { ...hotter.site, hottestTempC: 41.5 };
+    expect(describeInputChanges(current, hotter)).toEqual(["Hottest expected temperature: 38 °C → 41.5 °C."]);
+    expect(describeInputChanges(current, saved)).toEqual(["Hottest expected temperature: 38 °C → none."]);
+    // Read back from jsonb, the same value is no change.
+    expect(describeInputChanges(JSON.parse(JSON.stringify(current)), current)).toEqual([]);
+  });
+
   it("does not call the module's area a change for a plan saved before areas were kept, but sees a changed area", () => {
     const saved = base();
     const { areaM2: _area, ...withoutArea } = saved.parts.module;
