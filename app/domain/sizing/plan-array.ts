@@ -92,7 +92,7 @@ function voltageNote(array: ArrayPlan, kind: "mppt" | "pwm"): string | null {
   return kind === "mppt"
     ? `Short string: on a hot afternoon (each month's mean daily maximum air plus the NOCT rise at full sun) a string of ${array.layout.modulesInSeries} module(s) ` +
         `stays below the ${fmt(array.layout.stringVmpNeededV)} V the tracker needs to charge in ${names}. The tracker then works away from the modules' maximum power, ` +
-        `so the energy of those months is cut by the string's voltage ÷ the needed voltage (${range} kept) — Kitwright's own simple rule, meant to err on the safe side, ` +
+        `so the energy of those months is cut to the power on a straight line from the maximum power point to the open-circuit voltage (${range} kept; nothing where even the open-circuit voltage falls short) — Kitwright's own simple rule, meant to err on the safe side, ` +
         "in the module count, the monthly energy and the simulated year."
     : `String length on a PWM controller: a string of ${array.layout.modulesInSeries} module(s) does not match the battery, so in ${names} the array is counted at ` +
         `${range} of the matching string's energy (nothing where even its hot-afternoon open-circuit voltage cannot reach the charging voltage) — Kitwright's own simple rule.`;

@@ -14,10 +14,9 @@ import { hotCellTemperatureC, vmpAtCellTemperatureV, vocAtTemperatureV } from ".
  * Factors by string length: `factorsFor(ns)` gives the twelve monthly factors (0–1) for a string of ns
  * modules, or null when every month gets the engine's full figure.
  *
- * MPPT: factor = min(1, string Vmp on the month's hot afternoon ÷ the voltage needed to charge).
- * Kitwright's own simplification, no source: a buck tracker cannot pull the string below the battery's
- * voltage, so it works above the maximum power point and delivers less, and the shortfall in voltage is
- * taken as the shortfall in power for the whole month (hot afternoons stand for the month: the safe side).
+ * MPPT: a buck tracker cannot pull the string below the voltage it needs to charge, so a string whose
+ * hot-afternoon Vmp is lower works above its maximum power point: see mpptShortStringFactor (hot
+ * afternoons stand for the whole month: the safe side).
  *
  * PWM: the engine already holds the matching string at the battery's voltage hour by hour (factor 1).
  * A string of another length (a forced layout): no energy in a month whose hot-afternoon string Voc
@@ -30,8 +29,9 @@ export function voltageFactorsBySeries(ctx: LayoutContext, monthTMaxC: readonly 
   const hotCellC = monthTMaxC.map((t) => hotCellTemperatureC(Math.min(t, hottestAirC), ctx.module.noctC));
   if (ctx.controller.kind === "mppt") {
     const moduleVmpV = hotCellC.map((c) => vmpAtCellTemperatureV(ctx.module, c));
+    const moduleVocV = hotCellC.map((c) => vocAtTemperatureV(ctx.module, c));
     return (ns) => {
-      const factors = moduleVmpV.map((v) => Math.min(1, (ns * v) / neededV));
+      const factors = moduleVmpV.map((vmp, i) => mpptShortStringFactor(ns * vmp, ns * moduleVocV[i], neededV));
       return factors.every((f) => f >= 1) ? null : factors;
     };
   }
@@ -42,4 +42,18 @@ export function voltageFactorsBySeries(ctx: LayoutContext, monthTMaxC: readonly 
     const factors = moduleVocV.map((v) => (ns * v < neededV ? 0 : Math.min(1, matching / ns)));
     return factors.every((f) => f >= 1) ? null : factors;
   };
+}
+
+/**
+ * The share of its maximum power a string gives when the tracker must hold it at `neededV` (volts of
+ * the whole string, at the hot afternoon's cell temperature): 1 when its Vmp reaches neededV, 0 when
+ * even its Voc does not, and between them the power on a straight line of current from Imp at Vmp to
+ * zero at Voc: P/Pmp = (V/Vmp)·(Voc − V)/(Voc − Vmp) at V = neededV. Kitwright's own simplification, no
+ * source: above the maximum power point the real I–V curve bows outward (it is concave), so the
+ * straight line gives less current than the module would — the safe side.
+ */
+export function mpptShortStringFactor(stringVmpV: number, stringVocV: number, neededV: number): number {
+  if (stringVmpV >= neededV) return 1;
+  if (stringVocV <= neededV) return 0;
+  return ((neededV / stringVmpV) * (stringVocV - neededV)) / (stringVocV - stringVmpV);
 }

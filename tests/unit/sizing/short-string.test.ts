@@ -6,7 +6,7 @@ import type { ControllerPart, ModulePart } from "~/domain/sizing/parts";
 import type { KitPlanInput } from "~/domain/sizing/plan-types";
 import { chooseLayout, listLayouts } from "~/domain/sizing/string-layout";
 import type { LayoutContext } from "~/domain/sizing/string-layout";
-import { voltageFactorsBySeries } from "~/domain/sizing/string-voltage-harvest";
+import { mpptShortStringFactor, voltageFactorsBySeries } from "~/domain/sizing/string-voltage-harvest";
 import { simulateYear } from "~/domain/sizing/year-simulation";
 import { preparePlanSite } from "~/domain/sizing/kit-plan";
 import { TEST_MODULE } from "../solar/yield-fixtures";
@@ -88,18 +88,29 @@ describe("the layout when none is valid", () => {
 describe("the energy a short string loses", () => {
   const tMaxC = [0, 5, 10, 15, 20, 24, 24, 22, 18, 12, 6, 1];
 
-  it("MPPT: each month keeps the string's hot-afternoon Vmp ÷ the needed voltage — hand calculation", () => {
+  it("MPPT: a month keeps the power on a straight line from Vmp to Voc at the needed voltage — hand calculation", () => {
     const factorsFor = voltageFactorsBySeries(context(), tMaxC, 24);
     const one = factorsFor(1)!;
-    // June at 24 °C: 26.400 V ÷ 33.8 V = 0.7811.
-    expect(one[5]).toBeCloseTo((31.0 * (1 - 0.0042 * 31.5)) / (1 + 0.0006 * 31.5) / 33.8, 9);
-    // January at 0 °C: cell 0 + 32.5 = 32.5 °C, ΔT 7.5 K: 31.0 × (1 − 0.0315) / (1 + 0.0045) = 29.889 V ÷ 33.8 V = 0.8843.
-    expect(one[0]).toBeCloseTo((31.0 * (1 - 0.0042 * 7.5)) / (1 + 0.0006 * 7.5) / 33.8, 9);
-    expect(one[0]).toBeCloseTo(0.8843, 4);
+    // P/Pmp = (V/Vmp)·(Voc − V)/(Voc − Vmp) at V = 33.8 V (Kitwright's own rule, string-voltage-harvest.ts).
+    // June at 24 °C: cell 56.5 °C, ΔT 31.5 K: Vmp 26.400 V (above); Voc 37.8 × (1 − 0.0032 × 31.5) = 33.990 V.
+    // (33.8 / 26.400) × (33.990 − 33.8) / (33.990 − 26.400) = 1.2803 × 0.02503 = 0.0320.
+    expect(one[5]).toBeCloseTo(0.032, 4);
+    // January at 0 °C: cell 32.5 °C, ΔT 7.5 K: Vmp 31.0 × (1 − 0.0315) / (1 + 0.0045) = 29.889 V;
+    // Voc 37.8 × (1 − 0.024) = 36.893 V: (33.8 / 29.889) × (36.893 − 33.8) / (36.893 − 29.889) = 0.4994.
+    expect(one[0]).toBeCloseTo(0.4994, 4);
+    expect(mpptShortStringFactor(29.889, 36.8928, 33.8)).toBeCloseTo(0.4994, 4);
     // Two in series: 52.8 V on the hottest afternoon, above 33.8 V: the engine's full figures.
     expect(factorsFor(2)).toBeNull();
     // A design high above every month's mean maximum does not cut a month the string charges in.
     expect(voltageFactorsBySeries(context(), tMaxC, 40)(2)).toBeNull();
+  });
+
+  it("MPPT: the rule's ends — full power from Vmp up, nothing once even Voc falls short", () => {
+    expect(mpptShortStringFactor(34, 40, 33.8)).toBe(1);
+    expect(mpptShortStringFactor(30, 33.8, 33.8)).toBe(0);
+    expect(mpptShortStringFactor(30, 33, 33.8)).toBe(0);
+    // Just above Vmp the line starts at full power: V = Vmp gives (1)·(1) = 1.
+    expect(mpptShortStringFactor(33.79, 40, 33.8)).toBeCloseTo(1, 2);
   });
 
   it("PWM: a string shorter than the match gives nothing, a longer one the match's share", () => {
@@ -129,10 +140,11 @@ describe("a plan whose string cannot charge well", () => {
 
   it("cuts each month's energy per module by the voltage factor — hand calculation", () => {
     const factors = plan.array.months.map((m) => m.voltageFactor!);
-    // January (mean max −4 °C): cell 28.5 °C, ΔT 3.5 K: 31.0 × (1 − 0.0147) / (1 + 0.0021) = 30.480 V ÷ 34.4 V = 0.8861.
-    expect(factors[0]).toBeCloseTo((31.0 * (1 - 0.0042 * 3.5)) / (1 + 0.0006 * 3.5) / 34.4, 9);
-    // July (28 °C): cell 60.5 °C, ΔT 35.5 K: 31.0 × (1 − 0.1491) / (1 + 0.00213) = 26.322 V ÷ 34.4 V = 0.7652.
-    expect(factors[6]).toBeCloseTo((31.0 * (1 - 0.0042 * 35.5)) / (1 + 0.0006 * 35.5) / 34.4, 9);
+    // January (mean max −4 °C): cell 28.5 °C, ΔT 3.5 K: Vmp 31.0 × (1 − 0.0147) / (1 + 0.0021) = 30.480 V,
+    // Voc 37.8 × (1 − 0.0112) = 37.377 V: (34.4 / 30.480) × (37.377 − 34.4) / (37.377 − 30.480) = 0.4871.
+    expect(factors[0]).toBeCloseTo(0.4871, 4);
+    // July (28 °C): cell 60.5 °C, ΔT 35.5 K: Voc 37.8 × (1 − 0.1136) = 33.506 V < 34.4 V: the string cannot charge.
+    expect(factors[6]).toBe(0);
     plan.array.months.forEach((m, i) => {
       expect(m.energyPerModuleWhPerDay).toBeCloseTo(plan.moduleYield.months[i].energyWhPerDay * factors[i], 9);
       expect(m.arrayWhPerDay).toBeCloseTo(2 * m.energyPerModuleWhPerDay, 9);
@@ -142,7 +154,7 @@ describe("a plan whose string cannot charge well", () => {
     expect(full.array.months.every((m) => m.voltageFactor === 1)).toBe(true);
     expect(plan.array.modulesRequired).toBeGreaterThan(full.array.modulesRequired * 1.1);
     expect(plan.checks.find((c) => c.id === "array.vmp-hot")?.sentence).toMatch(/count the lost energy/);
-    expect(plan.assumptions.some((a) => /Short string: .* string's voltage ÷ the needed voltage/.test(a))).toBe(true);
+    expect(plan.assumptions.some((a) => /Short string: .* straight line from the maximum power point to the open-circuit voltage/.test(a))).toBe(true);
   });
 
   it("simulates the year with the cut energy: same weather, less harvest, more unmet days", () => {
