@@ -34,7 +34,7 @@ export function planAssumptions(site: PlanSite, design: DesignChoices, controlle
       "(beam and diffuse split by the Erbs et al. 1982 daily correlation). Cell temperature differences between clear and dull days are not modelled.",
   );
   notes.push(
-    "Battery in the simulation: the same weather year is first run once from a full battery, and the reported year starts from the charge that run ends 31 December with " +
+    "Battery in the simulation: the same weather year is first run from a full battery, and again from where it ended, until a year ends where it began (at most five runs); the reported year starts from that charge " +
       "(so a winter-worst site does not start its worst months with a free full charge); one energy balance per day; all array energy passes through the battery with the round-trip loss; " +
       "energy not taken when full is dumped; load beyond the depth-of-discharge floor goes unmet. Charge-current limits within the day are not modelled.",
   );

@@ -28,11 +28,11 @@ export function simulationCheck(simulation: YearSimulation, acceptableUnmetDays:
       figure("Unmet energy", simulation.unmetKWh, "kWh/year"),
       figure("Energy dumped when full", simulation.dumpedKWh, "kWh/year"),
       figure("Lowest state of charge", simulation.minStateOfChargePct, "%"),
-      figure("State of charge on 1 January (after a warm-up year)", simulation.startStateOfChargePct, "%"),
+      figure("State of charge on 1 January (after warm-up years)", simulation.startStateOfChargePct, "%"),
       figure("Weather seed", simulation.seed, ""),
     ],
     basis:
       "Daily clearness index from Bendt, Collares-Pereira & Rabl (1981), seeded; daily battery energy balance, " +
-      `starting 1 January at the ${fmt(simulation.startStateOfChargePct, 0)} % state of charge a warm-up run of the same year ends with.`,
+      `starting 1 January at the ${fmt(simulation.startStateOfChargePct, 0)} % state of charge that warm-up runs of the same year settle on.`,
   };
 }

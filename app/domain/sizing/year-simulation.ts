@@ -94,8 +94,11 @@ export function simulateYear(input: YearSimulationInput): YearSimulation {
     depthOfDischarge: input.depthOfDischarge,
     roundTripEfficiency: input.roundTripEfficiency,
   };
-  const warmUp = simulateBattery(batteryInput);
-  const battery = simulateBattery({ ...batteryInput, initialStoredWh: warmUp.endStoredWh });
+  const startWh = steadyStartWh(batteryInput);
+  const battery = simulateBattery({ ...batteryInput, initialStoredWh: startWh });
+  // As the state of charge of 31 December (the day the warm-up ends on), on the same depth scale.
+  const lastCapacityWh = usableCapacityWh[DAYS_IN_YEAR - 1];
+  const startStateOfChargePct = lastCapacityWh > 0 ? 100 * (1 - input.depthOfDischarge * (1 - startWh / lastCapacityWh)) : 0;
 
   const months: SimulatedMonth[] = [];
   for (let m = 1; m <= 12; m++) {
@@ -136,6 +139,26 @@ export function simulateYear(input: YearSimulationInput): YearSimulation {
     loadKWh,
     loadMetPct: loadKWh > 0 ? 100 * (1 - unmetKWh / loadKWh) : 100,
     minStateOfChargePct: Math.min(...battery.stateOfChargePct),
-    startStateOfChargePct: warmUp.stateOfChargePct[DAYS_IN_YEAR - 1],
+    startStateOfChargePct,
   };
+}
+
+/** Warm-up passes at most; a bank that drains over several years stops here, still on the full side. */
+export const MAX_WARM_UP_YEARS = 5;
+
+/**
+ * The charge to start 1 January from: the same weather year is run from a full battery, then again
+ * from where it ended, until a year ends within 0.1 % of the capacity where it began (at most
+ * MAX_WARM_UP_YEARS runs), so the reported year neither starts its worst months with a free full
+ * charge nor with a deficit a real year would not carry.
+ */
+export function steadyStartWh(input: Parameters<typeof simulateBattery>[0]): number {
+  let startWh = input.usableCapacityWh[0];
+  for (let pass = 0; pass < MAX_WARM_UP_YEARS; pass++) {
+    const endWh = simulateBattery({ ...input, initialStoredWh: startWh }).endStoredWh;
+    const settled = Math.abs(endWh - startWh) <= 0.001 * input.usableCapacityWh[0];
+    startWh = endWh;
+    if (settled) break;
+  }
+  return startWh;
 }
