@@ -21,7 +21,8 @@ const runVitest = !args.has("--e2e-only") && !args.has("--browser-only") && !arg
 const runE2e = !args.has("--no-e2e");
 const runProduction = !args.has("--browser-only");
 const runBrowser = !args.has("--production-only");
-process.env.KITWRIGHT_BUILD_DIR ||= "build-test";
+// Always its own folder, even when the shell exports KITWRIGHT_BUILD_DIR for npm start.
+process.env.KITWRIGHT_BUILD_DIR = "build-test";
 
 function step(title: string) {
   console.log(`\n━━ ${title}`);

@@ -124,7 +124,7 @@ export function equatorAzimuthDeg(latitudeDeg: number) {
 
 /**
  * A warning (not an error: a pole-facing roof can be a real choice) when the array faces more than
- * 90° away from the equator, where it harvests much less; null otherwise or while a figure is missing.
+ * 90° away from the equator, where a tilted array harvests less; null otherwise or while a figure is missing.
  */
 export function poleFacingWarning(latitudeDeg: unknown, azimuthDeg: unknown): string | null {
   const lat = typeof latitudeDeg === "string" && latitudeDeg.trim() === "" ? NaN : Number(latitudeDeg);
@@ -135,5 +135,5 @@ export function poleFacingWarning(latitudeDeg: unknown, azimuthDeg: unknown): st
   const equator = equatorAzimuthDeg(lat);
   const apart = Math.abs(((((az - equator) % 360) + 540) % 360) - 180);
   if (apart <= 90) return null;
-  return `This array faces the pole: it will harvest much less than one facing ${equator === 180 ? "south (180°)" : "north (0°)"}, the equator's side at this latitude. Check the compass direction (0° north, 90° east, 180° south).`;
+  return `This array faces the pole: tilted, it harvests less than one facing ${equator === 180 ? "south (180°)" : "north (0°)"}, the equator's side at this latitude — the more so the steeper the tilt and the further from the equator. Check the compass direction (0° north, 90° east, 180° south).`;
 }

@@ -154,7 +154,7 @@ export default function PlanPage({ loaderData, actionData }: Route.ComponentProp
           <p className="font-semibold">
             {l.changedBy === "data"
               ? "⚠ Since this revision was saved, the data behind it changed:"
-              : "⚠ Since this revision was saved, Kitwright works plans out more carefully, and the same inputs now give:"}
+              : "⚠ Kitwright's way of working out plans has changed since this revision was saved; the same inputs now give:"}
           </p>
           <ul className="mt-1 list-disc pl-5">
             {l.changes.map((c) => (

@@ -63,7 +63,7 @@ export default function SitePage({ loaderData, actionData }: Route.ComponentProp
         actions={
           quoted.length ? (
             <p className="max-w-xs text-right text-sm text-ink-soft" data-testid="site-delete-blocked">
-              Kept: {quoted.join(", ")} {quoted.length > 1 ? "were" : "was"} priced from this site's plans, so it cannot be deleted.
+              This site cannot be deleted: {quoted.length > 1 ? "quotes" : "quote"} {quoted.join(", ")} {quoted.length > 1 ? "were" : "was"} priced from its plans.
             </p>
           ) : (
             <Form

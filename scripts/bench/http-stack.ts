@@ -1,5 +1,6 @@
 // Boots what the HTTP benchmarks need: the test cluster with a fresh `kitwright_bench` database
 // (migrated and seeded), the fakes, the production server, and a team API key.
+import { serverBuildPath } from "../lib/build-dir";
 import { spawnSync } from "node:child_process";
 import { existsSync } from "node:fs";
 import { createHash, randomBytes } from "node:crypto";
@@ -27,7 +28,7 @@ export async function bootBenchStack() {
   const env = appEnv(BENCH_PORTS, url);
   run("node_modules/.bin/tsx", ["scripts/migrate.ts"], env);
   run("node_modules/.bin/tsx", ["scripts/seed.ts"], env);
-  if (!existsSync("build/server/index.js") || process.env.BENCH_BUILD !== "0") run("node_modules/.bin/react-router", ["build"], {});
+  if (!existsSync(serverBuildPath()) || process.env.BENCH_BUILD !== "0") run("node_modules/.bin/react-router", ["build"], {});
   await startFakes(env, BENCH_PORTS);
   // SIGUSR2 makes the server write a diagnostic report: the bench reads its V8 heap from it.
   const server = await startAppServer({ ...env, LOG_LEVEL: "error", NODE_OPTIONS: memoryReportNodeOptions() }, BENCH_PORTS);

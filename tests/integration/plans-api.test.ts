@@ -135,7 +135,7 @@ describe("the /plans list", () => {
     }
     const page = await a.client.loader(plansPage, "/plans");
     const byName = Object.fromEntries(page.data.plans.map((p: { name: string; sky: string | null }) => [p.name, p.sky]));
-    expect(byName["Preset kit"]).toBe("Sunshine assumed from the 'arid' sky preset (clearness 0.65), not measured data.");
+    expect(byName["Preset kit"]).toBe("Sunshine estimated for typical arid, mostly clear skies (clearness index 0.65), not measured at the site.");
     expect(byName["Measured kit"]).toBeNull();
   });
 });

@@ -4,9 +4,9 @@
 
 /** Clearness-index presets for sites without weather data (common practice, no source: round values). */
 export const SKY_PRESETS = {
-  arid: { label: "Arid, mostly clear skies", clearnessIndex: 0.65 },
-  temperate: { label: "Temperate, mixed skies", clearnessIndex: 0.5 },
-  overcast: { label: "Often overcast", clearnessIndex: 0.35 },
+  arid: { label: "Arid, mostly clear skies", words: "arid, mostly clear skies", clearnessIndex: 0.65 },
+  temperate: { label: "Temperate, mixed skies", words: "temperate, mixed skies", clearnessIndex: 0.5 },
+  overcast: { label: "Often overcast", words: "often overcast skies", clearnessIndex: 0.35 },
 } as const;
 export type SkyPreset = keyof typeof SKY_PRESETS;
 
@@ -60,13 +60,13 @@ function monthWords(a: SkyAssumption) {
   return a.months.length >= 12 ? "" : ` for ${a.months.map((m) => MONTH_SHORT[m - 1]).join(", ")}`;
 }
 
-/** The full sentence, for captions, the site page and the customer's quote. */
+/** The full sentence, for captions, the site page and the customer's quote (plain words first). */
 export function skyAssumptionSentence(a: SkyAssumption): string {
-  const from = a.preset ? `the '${a.preset}' sky preset` : "an assumed sky";
-  return `Sunshine assumed from ${from} (clearness ${clearnessWords(a)})${monthWords(a)}, not measured data.`;
+  const sky = a.preset ? `typical ${SKY_PRESETS[a.preset].words}` : "an assumed sky";
+  return `Sunshine estimated for ${sky}${monthWords(a)} (clearness index ${clearnessWords(a)}), not measured at the site.`;
 }
 
 /** A short form for lists and badges. */
 export function skyAssumptionShort(a: SkyAssumption): string {
-  return `Assumed sky: ${a.preset ?? "custom"}, clearness ${clearnessWords(a)}${monthWords(a)}`;
+  return `Assumed sky: ${a.preset ? SKY_PRESETS[a.preset].label.toLowerCase() : "custom"}, clearness index ${clearnessWords(a)}${monthWords(a)}`;
 }

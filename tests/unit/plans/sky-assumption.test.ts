@@ -13,7 +13,7 @@ import { toEngineSite } from "~/lib/site-forms";
 import { hutPlanInput } from "../sizing/plan-fixtures";
 import { markup, textOf } from "./render";
 
-const TEMPERATE = "Sunshine assumed from the 'temperate' sky preset (clearness 0.50), not measured data.";
+const TEMPERATE = "Sunshine estimated for typical temperate, mixed skies (clearness index 0.50), not measured at the site.";
 
 /** The hut's plan with the site on a preset, the way the plan service builds it (toEngineSite). */
 function presetPlanInput(preset: keyof typeof SKY_PRESETS): KitPlanInput {
@@ -33,7 +33,7 @@ const presetPlan = planKit(presetPlanInput("temperate"));
 describe("the sky assumption's words", () => {
   it("names the preset and its clearness index in plain words", () => {
     expect(skyAssumptionSentence(skyAssumptionOfPreset("temperate")!)).toBe(TEMPERATE);
-    expect(skyAssumptionShort(skyAssumptionOfPreset("arid")!)).toBe("Assumed sky: arid, clearness 0.65");
+    expect(skyAssumptionShort(skyAssumptionOfPreset("arid")!)).toBe("Assumed sky: arid, mostly clear skies, clearness index 0.65");
     expect(skyAssumptionOfPreset(null)).toBeNull();
     expect(skyAssumptionOfPreset("stormy")).toBeNull();
   });
@@ -52,7 +52,7 @@ describe("the sky assumption's words", () => {
       clearnessIndex: i === 0 ? 0.42 : 0.47,
     }));
     expect(skyAssumptionSentence(skyAssumptionOfMonths(months)!)).toBe(
-      "Sunshine assumed from an assumed sky (clearness 0.42–0.47) for Jan, Feb, not measured data.",
+      "Sunshine estimated for an assumed sky for Jan, Feb (clearness index 0.42–0.47), not measured at the site.",
     );
   });
 });

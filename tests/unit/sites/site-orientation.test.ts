@@ -12,7 +12,7 @@ describe("the equator's direction", () => {
 
 describe("a pole-facing array", () => {
   it("is warned about south of the equator when the array faces south", () => {
-    expect(poleFacingWarning(-46, 180)).toMatch(/^This array faces the pole: it will harvest much less than one facing north \(0°\)/);
+    expect(poleFacingWarning(-46, 180)).toMatch(/^This array faces the pole: tilted, it harvests less than one facing north \(0°\)/);
     expect(poleFacingWarning("-33.9", "200")).toMatch(/faces the pole/);
   });
 
