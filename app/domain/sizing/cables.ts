@@ -5,7 +5,7 @@
 //   controller → battery: the controller can push its rated charge current; fuse ≥ 1.25 × it;
 //   battery → inverter: the inverter's continuous rating at its cut-out voltage; fuse ≥ 1.25 × it.
 // The fuse protects the cable, so each conductor must be allowed at least the fuse's rating.
-import { CHARGE_VOLTAGE_PER_12V, INVERTER_CUTOUT_VOLTAGE_PER_12V } from "./chemistry";
+import { bankChargeVoltageV, INVERTER_CUTOUT_VOLTAGE_PER_12V } from "./chemistry";
 import type { ConductorChoice, ConductorSystem } from "./conductors";
 import { chooseConductor } from "./conductors";
 import { CONTINUOUS_DUTY_FACTOR, nextStandardRatingA } from "./fuses";
@@ -86,7 +86,7 @@ export function inverterMaxDcCurrentA(inverter: InverterPart, systemVoltageV: Sy
 export function sizeCableRuns(input: CableRunsInput): CableRunSizing[] {
   const { module, controller, layout, systemVoltageV } = input;
   const ctx: RunContext = { system: input.system, defaultDropTargetPct: input.dropTargetPct };
-  const chargeVoltageV = (systemVoltageV / 12) * CHARGE_VOLTAGE_PER_12V[input.battery.chemistry];
+  const chargeVoltageV = bankChargeVoltageV(systemVoltageV, input.battery.chemistry);
   const runs: CableRunSizing[] = [];
   const arrayVoltageV = controller.kind === "mppt" ? layout.modulesInSeries * module.vmpV : chargeVoltageV;
   runs.push(

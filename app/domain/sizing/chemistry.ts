@@ -16,6 +16,11 @@ export const CHARGE_VOLTAGE_PER_12V: Record<BatteryChemistry, number> = {
   nmc: 14.7,
 };
 
+/** The bank's charging voltage, V: the per-12 V figure scaled to the system voltage. */
+export function bankChargeVoltageV(systemVoltageV: number, chemistry: BatteryChemistry): number {
+  return (systemVoltageV / 12) * CHARGE_VOLTAGE_PER_12V[chemistry];
+}
+
 /**
  * Voltage per 12 V nominal at which an inverter typically cuts out; the battery→inverter current is
  * worked out at this voltage because the current is highest there (common practice, from memory).

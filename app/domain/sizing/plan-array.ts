@@ -6,12 +6,12 @@ import { moduleYieldFromProfile } from "../solar/module-yield";
 import type { SiteProfile } from "../solar/site-profile";
 import type { YieldResult } from "../solar/yield-types";
 import { arrayMonths, moduleForEnergy, modulesRequired, withArray } from "./array-sizing";
-import { CHARGE_VOLTAGE_PER_12V } from "./chemistry";
+import { bankChargeVoltageV } from "./chemistry";
 import { fmt, MONTH_NAMES } from "./format";
 import type { ArrayMonth, ArrayPlan, KitPlanInput } from "./plan-types";
 import { DEFAULT_MPPT_HEADROOM_V, chooseLayout, listLayouts } from "./string-layout";
 import type { LayoutContext } from "./string-layout";
-import { hotCellTemperatureC } from "./string-voltage";
+import { designHotAirC, hotCellTemperatureC } from "./string-voltage";
 import { voltageFactorsBySeries } from "./string-voltage-harvest";
 
 export interface PlannedArray {
@@ -37,12 +37,12 @@ export function planArray(profile: SiteProfile, input: KitPlanInput, loadWhPerDa
   const shadingFactor = 1 - (site.shadingDeratePct ?? 0) / 100;
   const energyWh = moduleYield.months.map((m) => m.energyWhPerDay * shadingFactor);
   const roundTripEfficiency = battery.roundTripEfficiencyPct / 100;
-  const hottestAirC = site.hottestTempC ?? Math.max(...site.months.map((m) => m.tMaxC));
+  const hottestAirC = designHotAirC(site);
   const ctx: LayoutContext = {
     module,
     controller,
     systemVoltageV,
-    chargeVoltageV: (systemVoltageV / 12) * CHARGE_VOLTAGE_PER_12V[battery.chemistry],
+    chargeVoltageV: bankChargeVoltageV(systemVoltageV, battery.chemistry),
     coldestAirC: site.coldestTempC,
     hotCellC: hotCellTemperatureC(hottestAirC, module.noctC),
     mpptHeadroomV: design.mpptHeadroomV ?? DEFAULT_MPPT_HEADROOM_V,

@@ -25,6 +25,11 @@ export function vmpAtCellTemperatureV(module: ModuleSpec, cellTemperatureC: numb
 }
 
 /** Hottest cell temperature: the hottest air plus the NOCT-model rise at full sun, °C. */
+/** The air temperature of the hot-afternoon check: the site's hottest expected, else the hottest month's mean daily maximum. */
+export function designHotAirC(site: { hottestTempC?: number; months: readonly { tMaxC: number }[] }): number {
+  return site.hottestTempC ?? Math.max(...site.months.map((m) => m.tMaxC));
+}
+
 export function hotCellTemperatureC(hottestAirC: number, noctC: number): number {
   return hottestAirC + ((noctC - NOCT_AIR_TEMPERATURE_C) / NOCT_IRRADIANCE_WM2) * HOT_CELL_IRRADIANCE_WM2;
 }

@@ -15,14 +15,14 @@ import {
   dischargeRateCheck,
   parallelStringsCheck,
 } from "../../sizing/battery-checks";
-import { CHARGE_VOLTAGE_PER_12V } from "../../sizing/chemistry";
+import { bankChargeVoltageV } from "../../sizing/chemistry";
 import { controllerVoltageCheck } from "../../sizing/controller-checks";
 import { DEFAULT_INVERTER_MARGIN_PCT, inverterChecks } from "../../sizing/inverter-checks";
 import type { PreparedPlanSite } from "../../sizing/kit-plan";
 import type { BatteryPart, ControllerPart, InverterPart, ModulePart } from "../../sizing/parts";
 import type { KitPlanInput } from "../../sizing/plan-types";
 import { DEFAULT_MPPT_HEADROOM_V, evaluateLayout, type LayoutContext } from "../../sizing/string-layout";
-import { hotCellTemperatureC } from "../../sizing/string-voltage";
+import { designHotAirC, hotCellTemperatureC } from "../../sizing/string-voltage";
 import type { CandidatePart } from "./types";
 
 export interface LoadOption {
@@ -92,7 +92,7 @@ export function voltageValidSeries(pair: ModulePair, base: KitPlanInput, chargeV
   const known = pair.seriesByChargeVoltage.get(chargeVoltageV);
   if (known) return known;
   const site = base.site;
-  const hottestAirC = site.hottestTempC ?? Math.max(...site.months.map((m) => m.tMaxC));
+  const hottestAirC = designHotAirC(site);
   const ctx: LayoutContext = {
     module: pair.module.part,
     controller: pair.controller.part,
@@ -113,7 +113,7 @@ export function voltageValidSeries(pair: ModulePair, base: KitPlanInput, chargeV
 }
 
 export function chargeVoltageV(base: KitPlanInput, battery: BatteryPart): number {
-  return (base.systemVoltageV / 12) * CHARGE_VOLTAGE_PER_12V[battery.chemistry];
+  return bankChargeVoltageV(base.systemVoltageV, battery.chemistry);
 }
 
 /** The plan form's limit on parallel battery strings (app/lib/plan-choices.ts). */
