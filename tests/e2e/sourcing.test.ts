@@ -66,6 +66,16 @@ it("flags the expired offer, then ranks modules per verified watt", async () => 
   expect(await rowOf("KS-1000F2").getByTestId("landed").locator("xpath=..").textContent()).toContain("for 12");
   expect(await rowOf("KS-100AGM").getByTestId("landed").locator("xpath=..").textContent()).toContain("for 8");
   expect(await rowOf("WP-LFP48-100").getByTestId("bank-count").textContent()).toContain("51.2 V blocks do not make a 24 V bank");
+  // …so it has no landed cost for this bank, and sorting by landed cost puts it after every model that has.
+  expect(await rowOf("WP-LFP48-100").getByTestId("landed-none").textContent()).toContain("not for a 24 V bank");
+  const table = page.getByTestId("compare-table");
+  await table.getByRole("button", { name: /^Landed/ }).click();
+  const models = await table.locator("tbody tr").evaluateAll((rows) => rows.map((r) => r.getAttribute("data-model") ?? ""));
+  expect(models.findIndex((m) => m.endsWith("WP-LFP48-100"))).toBe(models.length - 1);
+  await table.getByRole("button", { name: /^Landed/ }).click(); // the other direction: still last
+  const reversed = await table.locator("tbody tr").evaluateAll((rows) => rows.map((r) => r.getAttribute("data-model") ?? ""));
+  expect(reversed[0]).not.toBe(models[0]);
+  expect(reversed.findIndex((m) => m.endsWith("WP-LFP48-100"))).toBe(reversed.length - 1);
   await snap(page, "sourcing-compare-batteries");
   await browser.close();
 });

@@ -86,9 +86,31 @@ export function batteryCompareColumns(bankV: number): CompareColumns<BatteryComp
       cell: (info) => <MoneyFigure value={info.row.original.pricePerCycleKWh} extraDigits={2} unit="/ kWh" />,
     }),
     shared.unitPrice,
-    shared.landed,
+    // A model whose blocks cannot make the bank's voltage has no landed cost for this bank: it is not
+    // priced, and sorts after every model that can.
+    b.accessor((r) => (makesBank(r) ? moneyValue(r.landed) : undefined), {
+      id: "landed",
+      header: "Landed",
+      sortFn: "money",
+      sortUndefined: "last",
+      cell: (info) => {
+        if (makesBank(info.row.original)) {
+          const sharedCell = shared.landed.cell as (context: typeof info) => React.ReactNode;
+          return sharedCell(info);
+        }
+        return (
+          <span className="block text-xs text-fail" data-testid="landed-none">
+            not for a {bankV} V bank
+          </span>
+        );
+      },
+    }),
     shared.delivery,
   ];
+}
+
+function makesBank(row: BatteryComparisonRow) {
+  return !row.bank || row.bank.seriesExact;
 }
 
 const c = createColumnHelper<CompareFeatures, ControllerComparisonRow>();
