@@ -1,10 +1,10 @@
 // The plans API computes and saves a plan from a valid body and reads back the same result; a bad body
 // gets field messages and saves nothing (nor does the sites API). The /plans list says when a plan's
 // sunshine rests on a sky preset.
+import { callJsonApi, type RouteModule } from "./helpers/site-fixtures";
 import { describe, expect, it } from "vitest";
 import { installerWithTeam } from "./helpers/fixtures";
 import { choices, planningSetup } from "./helpers/planning-fixtures";
-import { BASE } from "./helpers/route-client";
 import * as plansApi from "~/routes/api.v1.plans";
 import * as planApi from "~/routes/api.v1.plan";
 import * as plansPage from "~/routes/plans";
@@ -12,21 +12,8 @@ import * as sitesApi from "~/routes/api.v1.sites";
 import * as teamApiKeys from "~/routes/team-api-keys";
 import { db } from "~/server/db.server";
 
-type Mod = { loader?: Function; action?: Function };
-
-async function callApi(mod: Mod, kind: "loader" | "action", path: string, key: string, body?: unknown, params: Record<string, string> = {}) {
-  const request = new Request(new URL(path, BASE), {
-    method: kind === "action" ? "POST" : "GET",
-    headers: { "Content-Type": "application/json", Authorization: `Bearer ${key}` },
-    body: kind === "action" ? JSON.stringify(body) : undefined,
-  });
-  try {
-    const res = (await mod[kind]!({ request, params, context: {} })) as Response;
-    return { status: res.status, body: await res.json() };
-  } catch (thrown) {
-    if (!(thrown instanceof Response)) throw thrown;
-    return { status: thrown.status, body: await thrown.json() };
-  }
+function callApi(mod: RouteModule, kind: "loader" | "action", path: string, key: string, body?: unknown, params: Record<string, string> = {}) {
+  return callJsonApi(mod, kind, path, { key, body, params });
 }
 
 async function teamWithKey(label: string) {

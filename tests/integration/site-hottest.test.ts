@@ -4,7 +4,6 @@
 import { describe, expect, it } from "vitest";
 import { installerWithTeam } from "./helpers/fixtures";
 import { choices, planningSetup } from "./helpers/planning-fixtures";
-import { BASE } from "./helpers/route-client";
 import * as sitesNew from "~/routes/sites-new";
 import * as site from "~/routes/site";
 import * as sitesApi from "~/routes/api.v1.sites";
@@ -13,39 +12,10 @@ import * as plansApi from "~/routes/api.v1.plans";
 import * as planPage from "~/routes/plan";
 import * as teamApiKeys from "~/routes/team-api-keys";
 import { db } from "~/server/db.server";
-import { VELL_HUT_SITE } from "../../data/demo/vell-valley-climate";
+import { callJsonApi, hutSiteForm as siteForm, type RouteModule } from "./helpers/site-fixtures";
 
-function siteForm(overrides: Record<string, string> = {}) {
-  const form: Record<string, string> = {
-    name: "Ridge hut",
-    customerName: "Hut warden",
-    latitudeDeg: "46.4",
-    longitudeDeg: "9.8",
-    elevationM: "2100",
-    timeZone: "Europe/Vienna",
-    tiltDeg: "55",
-    azimuthDeg: "180",
-    albedo: "0.2",
-    shadingDeratePct: "3",
-    coldestTempC: "-22",
-    irradianceSource: "measured",
-  };
-  VELL_HUT_SITE.months.forEach((m, i) => {
-    form[`months[${i}].ghiKWhM2Day`] = String(m.ghiKWhM2Day);
-    form[`months[${i}].tMaxC`] = String(m.tMaxC);
-    form[`months[${i}].tMinC`] = String(m.tMinC);
-  });
-  return { ...form, ...overrides };
-}
-
-async function callApi(mod: { loader?: Function; action?: Function }, kind: "loader" | "action", path: string, key: string, body?: unknown, params = {}) {
-  const request = new Request(new URL(path, BASE), {
-    method: kind === "action" ? "POST" : "GET",
-    headers: { "Content-Type": "application/json", Authorization: `Bearer ${key}` },
-    body: kind === "action" ? JSON.stringify(body) : undefined,
-  });
-  const res = (await mod[kind]!({ request, params, context: {} })) as Response;
-  return { status: res.status, body: await res.json() };
+function callApi(mod: RouteModule, kind: "loader" | "action", path: string, key: string, body?: unknown, params: Record<string, string> = {}) {
+  return callJsonApi(mod, kind, path, { key, body, params });
 }
 
 async function teamWithKey(label: string) {

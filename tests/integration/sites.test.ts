@@ -9,50 +9,7 @@ import * as sitesApi from "~/routes/api.v1.sites";
 import * as siteApi from "~/routes/api.v1.site";
 import * as teamApiKeys from "~/routes/team-api-keys";
 import { db } from "~/server/db.server";
-import { VELL_HUT_SITE } from "../../data/demo/vell-valley-climate";
-
-function siteForm(overrides: Record<string, string> = {}) {
-  const form: Record<string, string> = {
-    name: "Ridge hut",
-    customerName: "Hut warden",
-    latitudeDeg: "46.4",
-    longitudeDeg: "9.8",
-    elevationM: "2100",
-    timeZone: "Europe/Vienna",
-    tiltDeg: "55",
-    azimuthDeg: "180",
-    albedo: "0.2",
-    shadingDeratePct: "3",
-    coldestTempC: "-22",
-    irradianceSource: "measured",
-  };
-  VELL_HUT_SITE.months.forEach((m, i) => {
-    form[`months[${i}].ghiKWhM2Day`] = String(m.ghiKWhM2Day);
-    form[`months[${i}].tMaxC`] = String(m.tMaxC);
-    form[`months[${i}].tMinC`] = String(m.tMinC);
-  });
-  return { ...form, ...overrides };
-}
-
-async function callApi(
-  mod: { loader?: Function; action?: Function },
-  kind: "loader" | "action",
-  path: string,
-  init: { headers?: Record<string, string>; body?: unknown; params?: Record<string, string> },
-) {
-  const request = new Request(`http://127.0.0.1:3999${path}`, {
-    method: kind === "action" ? "POST" : "GET",
-    headers: { "Content-Type": "application/json", ...init.headers },
-    body: kind === "action" ? JSON.stringify(init.body) : undefined,
-  });
-  try {
-    const res = (await mod[kind]!({ request, params: init.params ?? {}, context: {} })) as Response;
-    return { status: res.status, body: await res.json() };
-  } catch (thrown) {
-    if (!(thrown instanceof Response)) throw thrown;
-    return { status: thrown.status, body: await thrown.json() };
-  }
-}
+import { callJsonApi as callApi, hutSiteForm as siteForm } from "./helpers/site-fixtures";
 
 describe("sites", () => {
   it("saves a site with its twelve months and shows it to the team only", async () => {
