@@ -1,26 +1,14 @@
 // The plans API computes and saves a plan from a valid body and reads back the same result; a bad body
 // gets field messages and saves nothing (nor does the sites API). The /plans list says when a plan's
 // sunshine rests on a sky preset.
-import { callJsonApi, type RouteModule } from "./helpers/site-fixtures";
+import { callWithKey as callApi, pumpSiteBody, teamWithKey } from "./helpers/site-fixtures";
 import { describe, expect, it } from "vitest";
-import { installerWithTeam } from "./helpers/fixtures";
 import { choices, planningSetup } from "./helpers/planning-fixtures";
 import * as plansApi from "~/routes/api.v1.plans";
 import * as planApi from "~/routes/api.v1.plan";
 import * as plansPage from "~/routes/plans";
 import * as sitesApi from "~/routes/api.v1.sites";
-import * as teamApiKeys from "~/routes/team-api-keys";
 import { db } from "~/server/db.server";
-
-function callApi(mod: RouteModule, kind: "loader" | "action", path: string, key: string, body?: unknown, params: Record<string, string> = {}) {
-  return callJsonApi(mod, kind, path, { key, body, params });
-}
-
-async function teamWithKey(label: string) {
-  const team = await installerWithTeam(label);
-  const key = (await team.client.action(teamApiKeys, "/team/api-keys", { intent: "create", name: `${label} sync` })).data.created.key as string;
-  return { ...team, key };
-}
 
 const count = async (table: "kit_plan" | "kit_plan_revision" | "site", teamId?: string) => {
   let q = db.selectFrom(table as "kit_plan").select((eb) => eb.fn.countAll<string>().as("n"));
@@ -86,21 +74,8 @@ describe("POST /api/v1/plans", () => {
 describe("POST /api/v1/sites with a bad body", () => {
   it("saves no site", async () => {
     const a = await teamWithKey("sites-api-bad");
-    const bad = await callApi(sitesApi, "action", "/api/v1/sites", a.key, {
-      name: "Pump well",
-      customerName: "Orchard co-op",
-      latitudeDeg: -33.9,
-      longitudeDeg: 18.6,
-      elevationM: 40,
-      timeZone: "Africa/Johannesburg",
-      tiltDeg: 120,
-      azimuthDeg: 0,
-      albedo: 0.2,
-      shadingDeratePct: 0,
-      coldestTempC: 0,
-      irradianceSource: "clearness-preset",
-      months: Array.from({ length: 12 }, () => ({ tMaxC: 25, tMinC: 12 })),
-    });
+    // A wrong tilt, and a sky preset source without its preset.
+    const bad = await callApi(sitesApi, "action", "/api/v1/sites", a.key, pumpSiteBody({ tiltDeg: 120, clearnessPreset: undefined }));
     expect(bad.status).toBe(400);
     expect(bad.body.error.fields.clearnessPreset).toMatch(/Choose a sky preset/);
     expect(await count("site", a.teamId)).toBe(0);

@@ -10,19 +10,8 @@ import * as sitesApi from "~/routes/api.v1.sites";
 import * as siteApi from "~/routes/api.v1.site";
 import * as plansApi from "~/routes/api.v1.plans";
 import * as planPage from "~/routes/plan";
-import * as teamApiKeys from "~/routes/team-api-keys";
 import { db } from "~/server/db.server";
-import { callJsonApi, hutSiteForm as siteForm, type RouteModule } from "./helpers/site-fixtures";
-
-function callApi(mod: RouteModule, kind: "loader" | "action", path: string, key: string, body?: unknown, params: Record<string, string> = {}) {
-  return callJsonApi(mod, kind, path, { key, body, params });
-}
-
-async function teamWithKey(label: string) {
-  const team = await installerWithTeam(label);
-  const key = (await team.client.action(teamApiKeys, "/team/api-keys", { intent: "create", name: `${label} sync` })).data.created.key as string;
-  return { ...team, key };
-}
+import { callWithKey as callApi, hutSiteForm as siteForm, pumpSiteBody, teamWithKey } from "./helpers/site-fixtures";
 
 const storedHottest = async (teamId: string) =>
   (await db.selectFrom("site").select("hottest_temp_c").where("team_id", "=", teamId).execute()).map((r) => r.hottest_temp_c);
@@ -70,22 +59,7 @@ describe("the site form's hottest expected temperature", () => {
 });
 
 describe("the sites API's hottest expected temperature", () => {
-  const body = {
-    name: "Pump well",
-    customerName: "Orchard co-op",
-    latitudeDeg: -33.9,
-    longitudeDeg: 18.6,
-    elevationM: 40,
-    timeZone: "Africa/Johannesburg",
-    tiltDeg: 30,
-    azimuthDeg: 0,
-    albedo: 0.2,
-    shadingDeratePct: 0,
-    coldestTempC: 0,
-    irradianceSource: "clearness-preset",
-    clearnessPreset: "arid",
-    months: Array.from({ length: 12 }, () => ({ tMaxC: 25, tMinC: 12 })),
-  };
+  const body = pumpSiteBody();
 
   it("round-trips it, leaves it out when not given, and refuses a bad one with its field path", async () => {
     const a = await teamWithKey("site-hot-api");

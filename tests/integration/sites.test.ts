@@ -9,7 +9,7 @@ import * as sitesApi from "~/routes/api.v1.sites";
 import * as siteApi from "~/routes/api.v1.site";
 import * as teamApiKeys from "~/routes/team-api-keys";
 import { db } from "~/server/db.server";
-import { callJsonApi as callApi, hutSiteForm as siteForm } from "./helpers/site-fixtures";
+import { callJsonApi as callApi, hutSiteForm as siteForm, pumpSiteBody } from "./helpers/site-fixtures";
 
 describe("sites", () => {
   it("saves a site with its twelve months and shows it to the team only", async () => {
@@ -79,22 +79,7 @@ describe("sites API", () => {
     const b = await installerWithTeam("site-api-b");
     const keyA = (await a.client.action(teamApiKeys, "/team/api-keys", { intent: "create", name: "Team A sync" })).data.created.key;
     const keyB = (await b.client.action(teamApiKeys, "/team/api-keys", { intent: "create", name: "Team B sync" })).data.created.key;
-    const body = {
-      name: "Pump well",
-      customerName: "Orchard co-op",
-      latitudeDeg: -33.9,
-      longitudeDeg: 18.6,
-      elevationM: 40,
-      timeZone: "Africa/Johannesburg",
-      tiltDeg: 30,
-      azimuthDeg: 0,
-      albedo: 0.2,
-      shadingDeratePct: 0,
-      coldestTempC: 0,
-      irradianceSource: "clearness-preset",
-      clearnessPreset: "arid",
-      months: Array.from({ length: 12 }, () => ({ tMaxC: 25, tMinC: 12 })),
-    };
+    const body = pumpSiteBody();
     const created = await callApi(sitesApi, "action", "/api/v1/sites", { headers: { Authorization: `Bearer ${keyA}` }, body });
     expect(created.status).toBe(201);
     const read = await callApi(siteApi, "loader", `/api/v1/sites/${created.body.id}`, {
